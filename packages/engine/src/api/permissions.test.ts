@@ -1,0 +1,25 @@
+import { describe, expect, it } from 'vitest';
+import { ROLES } from './common';
+import { ACTIONS, can, canEditSheet, PERMISSIONS } from './permissions';
+
+describe('permission table', () => {
+  it('names only known actions for every role', () => {
+    for (const role of ROLES) {
+      for (const action of PERMISSIONS[role]) expect(ACTIONS).toContain(action);
+    }
+  });
+
+  it('lets the owner do everything and the viewer only read', () => {
+    expect(ACTIONS.filter((action) => !can('owner', action))).toEqual([]);
+    expect(ACTIONS.filter((action) => can('viewer', action))).toEqual(['org.read', 'project.read', 'sheet.read']);
+  });
+
+  it('lets engineers edit sheets but not checkers or viewers', () => {
+    expect(ROLES.filter(canEditSheet)).toEqual(['owner', 'engineer']);
+  });
+
+  it('keeps approval with checkers and owners, and member management with owners', () => {
+    expect(ROLES.filter((role) => can(role, 'sheet.approve'))).toEqual(['owner', 'checker']);
+    expect(ROLES.filter((role) => can(role, 'org.manageMembers'))).toEqual(['owner']);
+  });
+});

@@ -1,0 +1,46 @@
+import type { Role } from './common';
+
+/**
+ * The one permission table of Sheaf: which role may take which action in an organization.
+ * The server decides every API route and every websocket connection with it; the web app uses
+ * the same table only to hide controls a member cannot use (the server still decides).
+ *
+ * - owner: everything, including members and settings
+ * - engineer: create and edit projects and sheets, submit them for check
+ * - checker: read, write notes, return or approve (never their own sheet: checked per sheet)
+ * - viewer: read
+ */
+export const ACTIONS = [
+  'org.read',
+  'org.manageMembers',
+  'project.read',
+  'project.create',
+  'sheet.read',
+  'sheet.create',
+  'sheet.edit',
+  'sheet.delete',
+  'sheet.submit',
+  'sheet.note',
+  'sheet.check',
+  'sheet.approve',
+] as const;
+export type Action = (typeof ACTIONS)[number];
+
+const READ: readonly Action[] = ['org.read', 'project.read', 'sheet.read'];
+
+export const PERMISSIONS: Readonly<Record<Role, readonly Action[]>> = {
+  owner: ACTIONS,
+  engineer: [...READ, 'project.create', 'sheet.create', 'sheet.edit', 'sheet.delete', 'sheet.submit', 'sheet.note'],
+  checker: [...READ, 'sheet.note', 'sheet.check', 'sheet.approve'],
+  viewer: READ,
+};
+
+/** True when `role` may take `action`. */
+export function can(role: Role, action: Action): boolean {
+  return PERMISSIONS[role].includes(action);
+}
+
+/** True when a member with this role may change a sheet's live content (a read-only connection otherwise). */
+export function canEditSheet(role: Role): boolean {
+  return can(role, 'sheet.edit');
+}
