@@ -1,0 +1,408 @@
+/**
+ * One sheet's live document while anyone has it open: the Y.Doc, the awareness (presence) and the
+ * websocket connections, speaking the y-websocket protocol.
+ *
+ * Durability rule: an update from a writer is appended to the update log in PostgreSQL before it
+ * is applied to the room's document, so nothing reaches another client (or a sync step 2 answer)
+ * before it is stored. A failed append is retried with backoff, forever; the update waits in
+ * memory meanwhile and nothing queued behind it is relayed either.
+ */
+import WebSocket from 'ws';
+import * as awarenessProtocol from 'y-protocols/awareness';
+import * as Y from 'yjs';
+import type { AwarenessUser } from './awarenessUser';
+import { stampAwarenessEntries } from './awarenessUser';
+import { COLLAB_CLOSE, COLLAB_CLOSE_REASON, type CollabCloseCode } from './closeCodes';
+import type { CollabLogger, CollabMetrics } from './collabMetrics';
+import {
+  awarenessMessage,
+  decodeAwarenessUpdate,
+  decodeClientMessage,
+  encodeAwarenessUpdate,
+  syncStep1Message,
+  syncStep2Message,
+  updateMessage,
+} from './messages';
+
+/** The sheet does not exist (any more): deleted while its room was open, say. */
+export class SheetGoneError extends Error {
+  override name = 'SheetGoneError';
+  constructor(readonly sheetId: string) {
+    super(`sheet ${sheetId} does not exist`);
+  }
+}
+
+/** What a room needs from the database. */
+export interface RoomPersistence {
+  /**
+   * The sheet's stored state with every logged update applied, and how many log rows that took.
+   * Throws SheetGoneError when there is no such sheet.
+   */
+  load(sheetId: string): Promise<{ state: Uint8Array; logRows: number }>;
+  /**
+   * Append updates to the log, in order, in one statement. Resolves once they are committed;
+   * throws SheetGoneError when the sheet was deleted.
+   */
+  append(sheetId: string, updates: readonly LoggedUpdate[]): Promise<void>;
+  /** Fold the log into the stored state (reading both from the database, not from the room). */
+  compact(sheetId: string): Promise<{ foldedRows: number }>;
+}
+
+export interface LoggedUpdate {
+  update: Uint8Array;
+  userId: string | null;
+}
+
+/** Who a connection belongs to and whether it may change the document. */
+export interface ConnectionIdentity {
+  user: AwarenessUser;
+  writable: boolean;
+}
+
+export interface RoomOptions {
+  persistence: RoomPersistence;
+  logger: CollabLogger;
+  metrics: CollabMetrics;
+  /** Compact once this many updates were logged since the last compaction. */
+  compactAfterUpdates: number;
+  /** Compact once the room has been quiet (no update stored) this long. */
+  compactAfterIdleMs: number;
+  /** Longest wait between two attempts to store an update. */
+  maxStoreRetryDelayMs: number;
+}
+
+interface Connection {
+  socket: WebSocket;
+  identity: ConnectionIdentity;
+  /** Awareness client ids this connection speaks for. */
+  clientIds: Set<number>;
+}
+
+interface QueuedUpdate {
+  update: Uint8Array;
+  origin: Connection;
+}
+
+/** Updates stored per INSERT at most, so one statement stays small under a burst. */
+const MAX_BATCH = 200;
+/** Awareness client ids one connection may hold (a tab holds one; a reload briefly two). */
+const MAX_CLIENT_IDS_PER_CONNECTION = 4;
+
+export class SheetRoom {
+  readonly doc: Y.Doc;
+  readonly awareness: awarenessProtocol.Awareness;
+  private readonly connections = new Map<WebSocket, Connection>();
+  private readonly owners = new Map<number, Connection>();
+  private readonly queue: QueuedUpdate[] = [];
+  private draining: Promise<void> | null = null;
+  private logRowsSinceCompaction: number;
+  private compacting: Promise<void> | null = null;
+  private compactAgain = false;
+  private idleTimer: NodeJS.Timeout | null = null;
+  private destroyed = false;
+  private gone = false;
+
+  private constructor(
+    readonly sheetId: string,
+    state: Uint8Array,
+    logRows: number,
+    private readonly options: RoomOptions,
+  ) {
+    this.doc = new Y.Doc();
+    Y.applyUpdate(this.doc, state);
+    this.logRowsSinceCompaction = logRows;
+    this.awareness = new awarenessProtocol.Awareness(this.doc);
+    // The server has no presence of its own.
+    this.awareness.setLocalState(null);
+    this.doc.on('update', this.relayUpdate);
+    this.awareness.on('update', this.relayAwareness);
+  }
+
+  /** Load the sheet from the database and open a room for it. */
+  static async open(sheetId: string, options: RoomOptions): Promise<SheetRoom> {
+    const { state, logRows } = await options.persistence.load(sheetId);
+    return new SheetRoom(sheetId, state, logRows, options);
+  }
+
+  get connectionCount(): number {
+    return this.connections.size;
+  }
+
+  /** True while updates wait to be stored or a compaction runs. */
+  get busy(): boolean {
+    return this.queue.length > 0 || this.draining !== null || this.compacting !== null;
+  }
+
+  /**
+   * Take a websocket into the room. `earlier` holds messages that arrived while the room loaded;
+   * they are handled first, in order.
+   */
+  addConnection(socket: WebSocket, identity: ConnectionIdentity, earlier: readonly Uint8Array[] = []): void {
+    if (this.destroyed) throw new Error(`addConnection: the room of sheet ${this.sheetId} is closed`);
+    const connection: Connection = { socket, identity, clientIds: new Set() };
+    this.connections.set(socket, connection);
+    socket.on('message', (data: WebSocket.RawData) => this.handleMessage(connection, rawDataBytes(data)));
+    socket.on('close', () => this.removeConnection(connection));
+    // Ask a writer for what it has that the room lacks (offline edits). A read-only client is not
+    // asked: its answer would be dropped anyway.
+    if (identity.writable) this.send(connection, syncStep1Message(this.doc));
+    const present = [...this.awareness.getStates().keys()];
+    if (present.length > 0) this.send(connection, awarenessMessage(this.awareness, present));
+    for (const data of earlier) this.handleMessage(connection, data);
+  }
+
+  /** Close every connection with `code` (they leave the room as their sockets close). */
+  closeConnections(code: CollabCloseCode): void {
+    for (const connection of this.connections.values()) connection.socket.close(code, COLLAB_CLOSE_REASON[code]);
+  }
+
+  /** Resolves once every update received so far is stored and applied. */
+  async flush(): Promise<void> {
+    while (this.draining !== null) await this.draining;
+  }
+
+  /** Compact now, unless nothing was logged since the last compaction; resolves when done. */
+  async compactNow(): Promise<void> {
+    this.clearIdleTimer();
+    if (this.logRowsSinceCompaction > 0 || this.compacting !== null) this.requestCompaction();
+    while (this.compacting !== null) await this.compacting;
+  }
+
+  /** Free the document and the awareness. Callers flush and compact first. */
+  destroy(): void {
+    if (this.destroyed) return;
+    this.destroyed = true;
+    this.clearIdleTimer();
+    this.closeConnections(COLLAB_CLOSE.shuttingDown);
+    this.doc.off('update', this.relayUpdate);
+    this.awareness.off('update', this.relayAwareness);
+    this.awareness.destroy();
+    this.doc.destroy();
+  }
+
+  private handleMessage(connection: Connection, data: Uint8Array): void {
+    if (!this.connections.has(connection.socket)) return;
+    try {
+      const message = decodeClientMessage(data);
+      switch (message.type) {
+        case 'sync-step-1':
+          this.send(connection, syncStep2Message(this.doc, message.stateVector));
+          return;
+        case 'sync-step-2':
+        case 'update':
+          if (!connection.identity.writable) {
+            this.options.metrics.readOnlyUpdatesDropped++;
+            return;
+          }
+          this.enqueue(connection, message.update);
+          return;
+        case 'awareness':
+          this.applyAwareness(connection, message.update);
+          return;
+        case 'query-awareness':
+          this.send(connection, awarenessMessage(this.awareness, [...this.awareness.getStates().keys()]));
+          return;
+      }
+    } catch (error) {
+      this.options.logger.warn(
+        { err: error, sheetId: this.sheetId, userId: connection.identity.user.id },
+        'closing a collab connection that sent a malformed message',
+      );
+      connection.socket.close(COLLAB_CLOSE.badRequest, COLLAB_CLOSE_REASON[COLLAB_CLOSE.badRequest]);
+    }
+  }
+
+  /**
+   * Queue a writer's update to be stored, then applied. What the room already has is cut out
+   * first, so a reconnecting client's sync step 2 logs only what is new. Throws on an update
+   * that does not decode: it must never reach the log, or every later load would fail on it.
+   */
+  private enqueue(origin: Connection, received: Uint8Array): void {
+    const update = Y.diffUpdate(received, Y.encodeStateVector(this.doc));
+    const decoded = Y.decodeUpdate(update);
+    if (decoded.structs.length === 0 && decoded.ds.clients.size === 0) return;
+    this.queue.push({ update, origin });
+    this.startDraining();
+  }
+
+  private startDraining(): void {
+    if (this.draining !== null || this.queue.length === 0) return;
+    this.draining = this.drain().finally(() => {
+      this.draining = null;
+      this.startDraining();
+    });
+  }
+
+  private async drain(): Promise<void> {
+    while (this.queue.length > 0 && !this.gone) {
+      const batch = this.queue.splice(0, MAX_BATCH);
+      try {
+        await this.storeWithRetry(batch);
+      } catch (error) {
+        if (!(error instanceof SheetGoneError)) throw error;
+        // Deleted while open: its edits have nowhere to go. Everyone is told the sheet is gone.
+        this.gone = true;
+        this.queue.length = 0;
+        this.options.logger.warn({ sheetId: this.sheetId }, 'sheet deleted while open; closing its room');
+        this.closeConnections(COLLAB_CLOSE.notFound);
+        return;
+      }
+      // Stored: now the room may apply them, which relays each to every other connection.
+      for (const { update, origin } of batch) this.apply(update, origin);
+      this.logRowsSinceCompaction += batch.length;
+      this.scheduleCompaction();
+    }
+  }
+
+  private apply(update: Uint8Array, origin: Connection): void {
+    try {
+      Y.applyUpdate(this.doc, update, origin);
+    } catch (error) {
+      // It decoded, so this is a Yjs-level failure; the log row is skipped the same way on load.
+      this.options.logger.error({ err: error, sheetId: this.sheetId }, 'a stored update does not apply');
+    }
+  }
+
+  private async storeWithRetry(batch: readonly QueuedUpdate[]): Promise<void> {
+    const updates = batch.map(({ update, origin }) => ({ update, userId: origin.identity.user.id }));
+    for (let attempt = 1; ; attempt++) {
+      try {
+        await this.options.persistence.append(this.sheetId, updates);
+        this.options.metrics.updatesStored += updates.length;
+        if (attempt > 1) this.options.logger.info({ sheetId: this.sheetId, attempt }, 'stored the waiting updates');
+        return;
+      } catch (error) {
+        if (error instanceof SheetGoneError) throw error;
+        this.options.metrics.storeFailures++;
+        const delayMs = Math.min(this.options.maxStoreRetryDelayMs, 50 * 2 ** Math.min(attempt, 16));
+        this.options.logger.error(
+          { err: error, sheetId: this.sheetId, updates: updates.length, attempt, retryInMs: delayMs },
+          'could not store updates in the log; they wait in memory and nothing after them is relayed',
+        );
+        await new Promise((resolve) => setTimeout(resolve, delayMs));
+      }
+    }
+  }
+
+  private scheduleCompaction(): void {
+    if (this.logRowsSinceCompaction >= this.options.compactAfterUpdates) {
+      this.clearIdleTimer();
+      this.requestCompaction();
+      return;
+    }
+    this.clearIdleTimer();
+    this.idleTimer = setTimeout(() => {
+      this.idleTimer = null;
+      this.requestCompaction();
+    }, this.options.compactAfterIdleMs);
+    this.idleTimer.unref();
+  }
+
+  private requestCompaction(): void {
+    if (this.compacting !== null) {
+      this.compactAgain = true;
+      return;
+    }
+    const rowsBefore = this.logRowsSinceCompaction;
+    this.compacting = this.options.persistence
+      .compact(this.sheetId)
+      .then(() => {
+        this.options.metrics.compactions++;
+        // Rows appended while the compaction ran may or may not be folded in; counting them again
+        // only brings the next compaction forward.
+        this.logRowsSinceCompaction = Math.max(0, this.logRowsSinceCompaction - rowsBefore);
+      })
+      .catch((error: unknown) => {
+        this.options.metrics.compactionFailures++;
+        this.options.logger.error({ err: error, sheetId: this.sheetId }, 'could not compact the update log; it stays as it is');
+      })
+      .finally(() => {
+        this.compacting = null;
+        if (this.compactAgain) {
+          this.compactAgain = false;
+          this.requestCompaction();
+        }
+      });
+  }
+
+  private clearIdleTimer(): void {
+    if (this.idleTimer !== null) clearTimeout(this.idleTimer);
+    this.idleTimer = null;
+  }
+
+  private applyAwareness(connection: Connection, received: Uint8Array): void {
+    const stamped = stampAwarenessEntries(decodeAwarenessUpdate(received), connection.identity.user, (clientId) =>
+      this.mayClaim(connection, clientId),
+    );
+    if (stamped.length === 0) return;
+    awarenessProtocol.applyAwarenessUpdate(this.awareness, encodeAwarenessUpdate(stamped), connection);
+  }
+
+  /**
+   * A connection may speak for a client id nobody holds (up to a few), or take one over from
+   * another connection of the same user (a reconnect before the old socket was seen to close).
+   */
+  private mayClaim(connection: Connection, clientId: number): boolean {
+    const owner = this.owners.get(clientId);
+    if (owner === connection) return true;
+    if (owner !== undefined && owner.identity.user.id !== connection.identity.user.id) return false;
+    return connection.clientIds.size < MAX_CLIENT_IDS_PER_CONNECTION;
+  }
+
+  private readonly relayUpdate = (update: Uint8Array, origin: unknown): void => {
+    const message = updateMessage(update);
+    for (const connection of this.connections.values()) {
+      if (connection !== origin) this.send(connection, message);
+    }
+  };
+
+  private readonly relayAwareness = (
+    { added, updated, removed }: { added: number[]; updated: number[]; removed: number[] },
+    origin: unknown,
+  ): void => {
+    const from = this.connectionOf(origin);
+    if (from !== undefined) {
+      for (const clientId of [...added, ...updated]) {
+        const previous = this.owners.get(clientId);
+        if (previous !== undefined && previous !== from) previous.clientIds.delete(clientId);
+        this.owners.set(clientId, from);
+        from.clientIds.add(clientId);
+      }
+    }
+    for (const clientId of removed) {
+      this.owners.get(clientId)?.clientIds.delete(clientId);
+      this.owners.delete(clientId);
+    }
+    const changed = [...added, ...updated, ...removed];
+    if (changed.length === 0) return;
+    // Sent to everyone, the sender too: a quiet client counts its own echoes as signs of life.
+    const message = awarenessMessage(this.awareness, changed);
+    for (const connection of this.connections.values()) this.send(connection, message);
+  };
+
+  /** The connection an event came from, when its origin is one of this room's connections. */
+  private connectionOf(origin: unknown): Connection | undefined {
+    if (typeof origin !== 'object' || origin === null || !('socket' in origin)) return undefined;
+    const connection = this.connections.get(origin.socket as WebSocket);
+    return connection === origin ? connection : undefined;
+  }
+
+  private removeConnection(connection: Connection): void {
+    if (!this.connections.delete(connection.socket)) return;
+    const clientIds = [...connection.clientIds];
+    if (clientIds.length > 0 && !this.destroyed) awarenessProtocol.removeAwarenessStates(this.awareness, clientIds, null);
+  }
+
+  private send(connection: Connection, message: Uint8Array): void {
+    if (connection.socket.readyState !== WebSocket.OPEN) return;
+    connection.socket.send(message, (error) => {
+      if (error) connection.socket.terminate();
+    });
+  }
+}
+
+function rawDataBytes(data: WebSocket.RawData): Uint8Array {
+  if (Array.isArray(data)) return new Uint8Array(Buffer.concat(data));
+  if (data instanceof ArrayBuffer) return new Uint8Array(data);
+  return data;
+}
