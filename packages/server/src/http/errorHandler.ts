@@ -1,0 +1,50 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { ErrorBody } from '@sheaf/engine/api';
+import { ApiError } from './ApiError';
+
+interface HttpLikeError {
+  status?: number;
+  statusCode?: number;
+  type?: string;
+  code?: string;
+  expose?: boolean;
+}
+
+/** Maps what a library throws (body parser, CSRF guard) onto the API's error codes. */
+function toApiError(error: unknown): ApiError | null {
+  if (error instanceof ApiError) return error;
+  if (typeof error !== 'object' || error === null) return null;
+  const e = error as HttpLikeError;
+  if (e.code === 'EBADCSRFTOKEN') {
+    return new ApiError(403, 'csrf', 'x-csrf-token: missing or wrong; fetch one from GET /api/auth/csrf (a new one after every sign-in and sign-out)');
+  }
+  if (e.type === 'entity.parse.failed') return new ApiError(400, 'invalid-field', 'body: not valid JSON');
+  if (e.type === 'entity.too.large') return new ApiError(413, 'too-large', 'body: larger than the server accepts');
+  if (e.type === 'encoding.unsupported' || e.type === 'charset.unsupported') {
+    return new ApiError(415, 'invalid-field', 'body: send JSON encoded as UTF-8');
+  }
+  return null;
+}
+
+/**
+ * The one error middleware: every error becomes `{ error: { code, message } }` with its status.
+ * Anything unexpected is logged with the request and answered 500 without internals.
+ */
+export const errorHandler: ErrorRequestHandler = (error, req, res, next) => {
+  if (res.headersSent) {
+    next(error);
+    return;
+  }
+  const known = toApiError(error);
+  const status = known?.status ?? 500;
+  const body: ErrorBody = known
+    ? { error: { code: known.code, message: known.message } }
+    : { error: { code: 'internal', message: 'the server failed to answer this request; it has been logged' } };
+  if (!known) req.log?.error({ err: error }, 'request failed');
+  res.status(status).json(body);
+};
+
+/** Unknown paths under /api answer JSON, not the web app. */
+export const apiNotFound: RequestHandler = (req, _res, next) => {
+  next(new ApiError(404, 'not-found', `no API route ${req.method} ${req.path}`));
+};
