@@ -80,7 +80,11 @@ function SheetRegister({ membership }: { membership: Membership }) {
           </Link>
         }
       />
-      <search className="mb-4 flex flex-wrap items-end gap-x-6 gap-y-3">
+      <div
+        role="search"
+        aria-label="Find sheets"
+        className="mb-4 flex flex-wrap items-end gap-x-6 gap-y-3"
+      >
         <div className="w-full max-w-xs">
           <label htmlFor="sheet-search" className="mb-1 block font-medium">
             Search
@@ -95,7 +99,7 @@ function SheetRegister({ membership }: { membership: Membership }) {
           />
         </div>
         <StatusFilter value={status} onChange={onStatus} />
-      </search>
+      </div>
 
       {sheets.isPending ? (
         <Loading what="sheets" />
