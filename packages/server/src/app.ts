@@ -29,6 +29,17 @@ export const SESSION_COOKIE = 'sheaf.sid';
 const SESSION_DAYS = 14;
 
 /**
+ * express-session gives its store a `generate` function that makes new sessions with that
+ * middleware's cookie options; a second `session()` on the same store (the websocket upgrade's,
+ * which only reads sessions) would replace it, and new sessions would lose SameSite and their
+ * lifetime. Pinning keeps the app's generator whatever is built later.
+ */
+function pinSessionGenerator(store: session.Store): void {
+  const generate = (store as session.Store & { generate?: unknown }).generate;
+  Object.defineProperty(store, 'generate', { configurable: true, get: () => generate, set: () => undefined });
+}
+
+/**
  * Builds the Express app (without listening): logging, security headers, sessions, passport, the
  * local fakes in development and test, provider sign-in, the API from its route table, the web
  * app, and the one error middleware.
@@ -65,6 +76,7 @@ export function createApp(deps: AppDeps): Express {
       cookie: { httpOnly: true, sameSite: 'lax', secure: production, maxAge: SESSION_DAYS * 24 * 3600_000, path: '/' },
     }),
   );
+  pinSessionGenerator(deps.sessionStore);
 
   const authenticator = createAuthenticator(deps);
   app.use(authenticator.initialize());

@@ -1,4 +1,5 @@
 import { createServer, type Server } from 'node:http';
+import type { Express } from 'express';
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app';
 import { attachUpgradeHandlers } from './collab/upgradeHandlers';
@@ -12,6 +13,7 @@ export interface RunningServer {
   /** Where the server is reached, e.g. `http://127.0.0.1:41234`. */
   url: string;
   deps: AppDeps;
+  app: Express;
   /** Stops accepting, ends open connections and websockets, and closes the database and mail. */
   close(): Promise<void>;
 }
@@ -52,7 +54,8 @@ export async function startServer(config: Config, overrides: ResourceOverrides =
   const publicUrl = config.publicUrl ?? `http://${urlHost(address, config.host)}:${address.port}`;
   const { close: closeResources, ...rest } = resources;
   const deps: AppDeps = { ...rest, urls: { publicUrl, internalUrl }, version: SERVER_VERSION };
-  server.on('request', createApp(deps));
+  const app = createApp(deps);
+  server.on('request', app);
   const upgrades = attachUpgradeHandlers(server);
 
   let closing: Promise<void> | undefined;
@@ -60,6 +63,7 @@ export async function startServer(config: Config, overrides: ResourceOverrides =
     server,
     url: publicUrl,
     deps,
+    app,
     close() {
       closing ??= (async () => {
         await upgrades.close();

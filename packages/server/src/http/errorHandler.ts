@@ -46,5 +46,6 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, next) => {
 
 /** Unknown paths under /api answer JSON, not the web app. */
 export const apiNotFound: RequestHandler = (req, _res, next) => {
-  next(new ApiError(404, 'not-found', `no API route ${req.method} ${req.path}`));
+  const path = req.originalUrl.split('?')[0] ?? req.originalUrl;
+  next(new ApiError(404, 'not-found', `no API route ${req.method} ${path}`));
 };

@@ -27,7 +27,9 @@ const NOT_BUILT = renderPage(
  */
 export function webAppRouter(webDist: string, fontsDir: string): Router {
   const router = Router();
-  router.use('/fonts', express.static(fontsDir, { fallthrough: false, immutable: true, maxAge: '30d', index: false }));
+  router.use('/fonts', express.static(fontsDir, { immutable: true, maxAge: '30d', index: false }), (req, res) => {
+    res.status(404).type('text/plain').send(`no font file ${req.path}`);
+  });
 
   const assets = express.static(webDist, {
     index: false,

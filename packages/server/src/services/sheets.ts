@@ -135,8 +135,8 @@ export async function updateSheet(
     }
     if (changes.title !== undefined && changes.title !== sheet.title) {
       await manager.query(
-        `UPDATE sheets SET title = $2, content = jsonb_set(content, '{title}', to_jsonb($2::text)), updated_at = now() WHERE id = $1`,
-        [sheet.id, changes.title],
+        `UPDATE sheets SET title = $2, content = jsonb_set(content, '{title}', to_jsonb($3::text)), updated_at = now() WHERE id = $1`,
+        [sheet.id, changes.title, changes.title],
       );
     }
   });

@@ -1,0 +1,174 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { can } from '@sheaf/engine/api';
+import type { Route } from '../src/routes/defineRoute';
+import { insertOrganization } from '../src/services/organizations';
+import { createPasswordReset } from '../src/services/passwordResets';
+import {
+  ACTORS,
+  addMember,
+  createInvitation,
+  createSheetIn,
+  createTeam,
+  createUser,
+  signInAs,
+  TEST_PASSWORD,
+  uniqueEmail,
+  type Actor,
+  type Team,
+  type TestUser,
+} from './helpers/fixtures';
+import type { TestClient } from './helpers/TestClient';
+import { startTestServer, type TestServer } from './helpers/testServer';
+
+/** A request that succeeds for a caller the route admits. */
+interface Call {
+  params?: Record<string, string>;
+  body?: unknown;
+}
+
+interface CallContext {
+  server: TestServer;
+  team: Team;
+  actor: Actor;
+  /** The actor's account; undefined for anonymous. */
+  user: TestUser | undefined;
+}
+
+/**
+ * How to call each route of the route table so that it succeeds when the caller is allowed.
+ * A route without an entry here fails the matrix: every new route must join it.
+ */
+const CALLS: Record<string, (ctx: CallContext) => Promise<Call>> = {
+  'system.health': async () => ({}),
+  'system.openapi': async () => ({}),
+  'auth.csrf': async () => ({}),
+  'dev.mail': async () => ({}),
+  'auth.signup': async () => ({ body: { email: uniqueEmail('signup'), password: TEST_PASSWORD, name: 'Matrix Signup' } }),
+  'auth.signin': async ({ server, user }) => {
+    const who = user ?? (await createUser(server.deps.dataSource, 'signin'));
+    return { body: { email: who.email, password: who.password } };
+  },
+  'auth.signout': async () => ({}),
+  'auth.me': async () => ({}),
+  'auth.updateMe': async ({ user }) => ({ body: { name: user?.name ?? 'Nobody' } }),
+  'auth.resetRequest': async () => ({ body: { email: uniqueEmail('reset') } }),
+  'auth.resetConfirm': async ({ server }) => {
+    const throwaway = await createUser(server.deps.dataSource, 'reset-target');
+    const token = await createPasswordReset(server.deps.dataSource, throwaway.id);
+    return { body: { token, password: 'a brand new passphrase' } };
+  },
+  'orgs.list': async () => ({}),
+  'orgs.create': async () => ({ body: { name: 'Matrix Fabrication' } }),
+  'members.list': async ({ team }) => ({ params: { orgId: team.organizationId } }),
+  'invitations.create': async ({ team }) => ({
+    params: { orgId: team.organizationId },
+    body: { email: uniqueEmail('invitee'), role: 'viewer' },
+  }),
+  'members.update': async ({ server, team }) => {
+    const target = await createUser(server.deps.dataSource, 'role-target');
+    await addMember(server.deps.dataSource, team.organizationId, target.id, 'viewer');
+    return { params: { orgId: team.organizationId, userId: target.id }, body: { role: 'checker' } };
+  },
+  'members.remove': async ({ server, team }) => {
+    const target = await createUser(server.deps.dataSource, 'removal-target');
+    await addMember(server.deps.dataSource, team.organizationId, target.id, 'viewer');
+    return { params: { orgId: team.organizationId, userId: target.id } };
+  },
+  'invitations.preview': async ({ server, team }) => ({
+    params: { token: await createInvitation(server.deps.dataSource, { organizationId: team.organizationId, email: uniqueEmail(), role: 'checker' }) },
+  }),
+  'invitations.accept': async ({ server, user }) => {
+    // A fresh organization, so the actor is not a member of it yet.
+    const organization = await insertOrganization(server.deps.dataSource.manager, 'Matrix Invitations');
+    const email = user?.email ?? uniqueEmail('anonymous');
+    return { params: { token: await createInvitation(server.deps.dataSource, { organizationId: organization.id, email, role: 'viewer' }) } };
+  },
+  'projects.list': async ({ team }) => ({ params: { orgId: team.organizationId } }),
+  'projects.create': async ({ team }) => ({ params: { orgId: team.organizationId }, body: { name: 'Matrix trolley rail' } }),
+  'sheets.search': async ({ team }) => ({ params: { orgId: team.organizationId } }),
+  'sheets.listInProject': async ({ team }) => ({ params: { projectId: team.project.id } }),
+  'sheets.create': async ({ team }) => ({ params: { projectId: team.project.id }, body: { title: 'Matrix sheet' } }),
+  'sheets.get': async ({ team }) => ({ params: { sheetId: team.sheet.id } }),
+  'sheets.update': async ({ server, team }) => {
+    const sheet = await createSheetIn(server.deps.dataSource, team.project, team.users.engineer.id, 'To be renamed');
+    return { params: { sheetId: sheet.id }, body: { title: 'Renamed by the matrix' } };
+  },
+  'sheets.delete': async ({ server, team }) => {
+    const sheet = await createSheetIn(server.deps.dataSource, team.project, team.users.engineer.id, 'To be deleted');
+    return { params: { sheetId: sheet.id } };
+  },
+};
+
+/** Routes after which the client's session is another one (or none). */
+const SESSION_CHANGING = new Set(['auth.signin', 'auth.signup', 'auth.signout']);
+
+/** The status the permission table implies for this caller. */
+function expectedStatus(route: Route, actor: Actor): { status: number; code?: string } {
+  const success = { status: route.response.status };
+  switch (route.access.kind) {
+    case 'public':
+      return success;
+    case 'signed-in':
+      return actor === 'anonymous' ? { status: 401, code: 'not-signed-in' } : success;
+    case 'permission':
+      if (actor === 'anonymous') return { status: 401, code: 'not-signed-in' };
+      if (actor === 'outsider') return { status: 404, code: 'not-found' };
+      return can(actor, route.access.action) ? success : { status: 403, code: 'forbidden' };
+  }
+}
+
+function fillPath(path: string, params: Record<string, string> = {}): string {
+  return path.replace(/:(\w+)/g, (_, name: string) => {
+    const value = params[name];
+    if (value === undefined) throw new Error(`no value for :${name} in ${path}`);
+    return encodeURIComponent(value);
+  });
+}
+
+describe('route x role matrix, generated from the route table and the permission table', () => {
+  let server: TestServer;
+  let team: Team;
+
+  beforeAll(async () => {
+    server = await startTestServer();
+    team = await createTeam(server.deps.dataSource, 'matrix');
+  });
+  afterAll(async () => {
+    await server?.close();
+  });
+
+  it('has a way to call every route in the table', () => {
+    const missing = server.routes.map((r) => r.id).filter((id) => !(id in CALLS));
+    expect(missing).toEqual([]);
+    expect(Object.keys(CALLS).filter((id) => !server.routes.some((r) => r.id === id))).toEqual([]);
+  });
+
+  it('answers every route for anonymous, non-member, viewer, checker, engineer and owner as the table says', async () => {
+    const cells: string[] = [];
+    const failures: string[] = [];
+    // One signed-in client per actor; routes that replace the session get a fresh one each time.
+    const clients = new Map<Actor, TestClient>();
+    for (const actor of ACTORS) clients.set(actor, await signInAs(server, team, actor));
+    for (const route of server.routes) {
+      for (const actor of ACTORS) {
+        const expected = expectedStatus(route, actor);
+        const client = SESSION_CHANGING.has(route.id) ? await signInAs(server, team, actor) : (clients.get(actor) as TestClient);
+        const user = actor === 'anonymous' ? undefined : team.users[actor];
+        const call = await (CALLS[route.id] as (ctx: CallContext) => Promise<Call>)({ server, team, actor, user });
+        const response = await client.request(route.method.toUpperCase(), fillPath(route.path, call.params), { body: call.body });
+        const cell = `${route.method.toUpperCase()} ${route.path} as ${actor}: expected ${expected.status}${expected.code ? ` ${expected.code}` : ''}, got ${response.status} ${response.status >= 400 ? JSON.stringify(response.body) : ''}`;
+        cells.push(cell);
+        const codeOk = expected.code === undefined || response.body?.error?.code === expected.code;
+        if (response.status !== expected.status || !codeOk) failures.push(cell);
+      }
+    }
+    expect(failures).toEqual([]);
+    expect(cells).toHaveLength(server.routes.length * ACTORS.length);
+  });
+
+  it('really exercises all three refusals and success for organization routes', () => {
+    const permissionRoutes = server.routes.filter((r) => r.access.kind === 'permission');
+    const outcomes = new Set(permissionRoutes.flatMap((route) => ACTORS.map((actor) => expectedStatus(route, actor).status)));
+    expect([...outcomes].sort()).toEqual([200, 201, 204, 401, 403, 404]);
+  });
+});
