@@ -17,9 +17,14 @@ export const coulombMohrTheory: FailureTheory = {
   label: 'Coulomb-Mohr (brittle)',
   needs: ['Sut', 'Suc'],
   validate: (strength) => positiveStrength('Sut', strength.Sut) ?? positiveStrength('Suc', strength.Suc),
-  assess([s1, , s3], strength) {
+  assess([s1, s2, s3], strength) {
     const equivalent = s1 - (strength.Sut! / strength.Suc!) * s3;
-    return { equivalent, factor: ratioOrInfinity(strength.Sut!, equivalent), extra: {} };
+    return { equivalent, factor: coulombMohrTheory.factorKernel(strength)(s1, s2, s3), extra: {} };
+  },
+  factorKernel(strength) {
+    const sut = strength.Sut!;
+    const k = sut / strength.Suc!;
+    return (s1, _s2, s3) => ratioOrInfinity(sut, s1 - k * s3);
   },
   envelope: (strength) => ({
     theory: 'coulomb-mohr',

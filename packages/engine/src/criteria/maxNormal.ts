@@ -15,10 +15,13 @@ export const maxNormalTheory: FailureTheory = {
   label: 'maximum normal stress',
   needs: ['Sut', 'Suc'],
   validate: (strength) => positiveStrength('Sut', strength.Sut) ?? positiveStrength('Suc', strength.Suc),
-  assess([s1, , s3], strength) {
-    const tension = ratioOrInfinity(strength.Sut!, s1);
-    const compression = ratioOrInfinity(strength.Suc!, -s3);
-    return { equivalent: null, factor: Math.min(tension, compression), extra: {} };
+  assess([s1, s2, s3], strength) {
+    return { equivalent: null, factor: maxNormalTheory.factorKernel(strength)(s1, s2, s3), extra: {} };
+  },
+  factorKernel(strength) {
+    const sut = strength.Sut!;
+    const suc = strength.Suc!;
+    return (s1, _s2, s3) => Math.min(ratioOrInfinity(sut, s1), ratioOrInfinity(suc, -s3));
   },
   envelope(strength) {
     const st = strength.Sut!;

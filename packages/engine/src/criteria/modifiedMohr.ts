@@ -29,14 +29,18 @@ export const modifiedMohrTheory: FailureTheory = {
     }
     return null;
   },
-  assess([s1, , s3], strength) {
+  assess([s1, s2, s3], strength) {
+    return { equivalent: null, factor: modifiedMohrTheory.factorKernel(strength)(s1, s2, s3), extra: {} };
+  },
+  factorKernel(strength) {
     const sut = strength.Sut!;
     const suc = strength.Suc!;
-    let factor: number;
-    if (s1 <= 0) factor = ratioOrInfinity(suc, -s3);
-    else if (s3 >= 0 || -s3 <= s1) factor = sut / s1;
-    else factor = 1 / (((suc - sut) * s1) / (suc * sut) - s3 / suc);
-    return { equivalent: null, factor, extra: {} };
+    const slope = (suc - sut) / (suc * sut);
+    return (s1, _s2, s3) => {
+      if (s1 <= 0) return ratioOrInfinity(suc, -s3);
+      if (s3 >= 0 || -s3 <= s1) return sut / s1;
+      return 1 / (slope * s1 - s3 / suc);
+    };
   },
   envelope(strength) {
     const st = strength.Sut!;

@@ -64,7 +64,7 @@ export const mohrCoulombTheory: FailureTheory = {
     if (c === 0 && phi === 0) return { key: 'c', message: 'c and phi cannot both be zero (no strength)' };
     return null;
   },
-  assess([s1, , s3], strength): TheoryAssessment {
+  assess([s1, s2, s3], strength): TheoryAssessment {
     const c = strength.c!;
     const phi = strength.phi!;
     const center = -(s1 + s3) / 2;
@@ -77,7 +77,7 @@ export const mohrCoulombTheory: FailureTheory = {
     const loadFactor = demand > 0 ? (c * cos) / demand : Infinity;
     return {
       equivalent: null,
-      factor: strengthReductionFactor(center, radius, c, phi),
+      factor: mohrCoulombTheory.factorKernel(strength)(s1, s2, s3),
       extra: {
         radiusRatio,
         loadFactor,
@@ -86,6 +86,11 @@ export const mohrCoulombTheory: FailureTheory = {
         planeShear: radius * cos,
       },
     };
+  },
+  factorKernel(strength) {
+    const c = strength.c!;
+    const phi = strength.phi!;
+    return (s1, _s2, s3) => strengthReductionFactor(-(s1 + s3) / 2, (s1 - s3) / 2, c, phi);
   },
   envelope(strength, options) {
     const c = strength.c!;

@@ -18,8 +18,12 @@ export const trescaTheory: FailureTheory = {
   needs: ['Sy'],
   validate: (strength) => positiveStrength('Sy', strength.Sy),
   assess([s1, s2, s3], strength) {
-    const equivalent = trescaStress(s1, s2, s3);
-    return { equivalent, factor: ratioOrInfinity(strength.Sy!, equivalent), extra: {} };
+    return { equivalent: trescaStress(s1, s2, s3), factor: trescaTheory.factorKernel(strength)(s1, s2, s3), extra: {} };
+  },
+  factorKernel(strength) {
+    const Sy = strength.Sy!;
+    // Sorted input: s1 - s3 is the largest difference.
+    return (s1, _s2, s3) => ratioOrInfinity(Sy, s1 - s3);
   },
   envelope: (strength) => ({ theory: 'tresca', principalPlane: [mohrHexagon(strength.Sy!, strength.Sy!)] }),
 };

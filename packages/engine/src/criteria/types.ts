@@ -72,6 +72,9 @@ export interface TheoryAssessment {
   readonly extra: Readonly<Record<string, number>>;
 }
 
+/** Factor of safety from sorted principal stresses s1 >= s2 >= s3 (Pa); Infinity when unbounded. @public */
+export type FactorKernel = (s1: number, s2: number, s3: number) => number;
+
 /** Options for envelope geometry. @public */
 export interface EnvelopeOptions {
   /** Number of segments for curved outlines (von Mises ellipse). Default 120. */
@@ -93,5 +96,11 @@ export interface FailureTheory {
   /** A message naming the strength value at fault, or null when the strengths are usable. */
   validate(strength: Strength): { readonly key: StrengthKey; readonly message: string } | null;
   assess(principal: PrincipalTriple, strength: Strength): TheoryAssessment;
+  /**
+   * The factor of safety as a plain-number function of the sorted principal stresses (Pa), with
+   * the strengths bound once: the hot loop of batch evaluation calls it per row. `assess` uses
+   * the same function, so single cells and point sets agree.
+   */
+  factorKernel(strength: Strength): FactorKernel;
   envelope(strength: Strength, options?: EnvelopeOptions): EnvelopeGeometry;
 }

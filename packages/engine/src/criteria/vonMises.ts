@@ -18,7 +18,11 @@ export const vonMisesTheory: FailureTheory = {
   validate: (strength) => positiveStrength('Sy', strength.Sy),
   assess([s1, s2, s3], strength) {
     const equivalent = vonMisesFromPrincipal(s1, s2, s3);
-    return { equivalent, factor: ratioOrInfinity(strength.Sy!, equivalent), extra: {} };
+    return { equivalent, factor: vonMisesTheory.factorKernel(strength)(s1, s2, s3), extra: {} };
+  },
+  factorKernel(strength) {
+    const Sy = strength.Sy!;
+    return (s1, s2, s3) => ratioOrInfinity(Sy, vonMisesFromPrincipal(s1, s2, s3));
   },
   envelope: (strength, options) => ({
     theory: 'von-mises',

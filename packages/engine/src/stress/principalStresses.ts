@@ -113,10 +113,10 @@ function complementPairs(m: Sym3, known: Vector3): [Pair, Pair] {
 
 /** Flip a vector so that its largest component (first one on ties) is positive. */
 function canonicalSign(v: Vector3): Mutable3 {
-  let k = 0;
+  let k: 0 | 1 | 2 = 0;
   if (Math.abs(v[1]) > Math.abs(v[k])) k = 1;
   if (Math.abs(v[2]) > Math.abs(v[k])) k = 2;
-  return v[k]! < 0 ? [-v[0] + 0, -v[1] + 0, -v[2] + 0] : [v[0] + 0, v[1] + 0, v[2] + 0];
+  return v[k] < 0 ? [-v[0] + 0, -v[1] + 0, -v[2] + 0] : [v[0] + 0, v[1] + 0, v[2] + 0];
 }
 
 interface Pair {
