@@ -20,10 +20,14 @@ describe('formatStress', () => {
     expect(formatStress(-10_156_098, megapascal)).toBe('\u221210.2 MPa');
   });
 
-  it('gives numbers that share a reference the same decimals', () => {
+  it('keeps three figures but no more than one decimal beyond the reference', () => {
     expect(formatStressNumber(25e6, megapascal, { reference: 80e6 })).toBe('25.0');
-    expect(formatStressNumber(3e-6, megapascal, { reference: 80e6 })).toBe('0.0');
-    expect(formatStressNumber(-3e-6, megapascal, { reference: 80e6 })).toBe('0.0');
+    expect(formatStressNumber(14.142e6, megapascal, { reference: 504e6 })).toBe('14.1');
+    expect(formatStressNumber(3.04e6, megapascal, { reference: 80e6 })).toBe('3.04');
+    expect(formatStressNumber(0.5e6, megapascal, { reference: 80e6 })).toBe('0.50');
+    // Rounding noise beside real stresses prints as zero, without a sign.
+    expect(formatStressNumber(3e-6, megapascal, { reference: 80e6 })).toBe('0.00');
+    expect(formatStressNumber(-3e-6, megapascal, { reference: 80e6 })).toBe('0.00');
   });
 
   it('converts to other display units', () => {
@@ -56,6 +60,8 @@ describe('formatAngle', () => {
     expect(formatAngle(0.43249)).toBe('24.8°');
     expect(formatAngle(-Math.PI / 2)).toBe('\u221290.0°');
     expect(formatAngle(0)).toBe('0.0°');
+    expect(formatAngle((2.5 * Math.PI) / 180)).toBe('2.5°');
+    expect(formatAngle((-0.01 * Math.PI) / 180)).toBe('0.0°');
   });
 });
 

@@ -11,11 +11,13 @@ export interface NumberFormatOptions {
   /** Significant figures of the reference magnitude; default 3. */
   significant?: number;
   /**
-   * Largest magnitude printed alongside this number (same units). When given, every number
-   * formatted with the same reference gets the same decimals, so a figure reads
-   * "X (80.0, 25.0)" and a shear of 3e-12 prints as 0.0 instead of 3.00e-12.
+   * Largest magnitude printed alongside this number (same units). When given, the number keeps
+   * its own significant figures but no more than one decimal beyond what the reference needs,
+   * so a figure reads "X (80.0, 25.0)" and a shear of 3e-12 prints as 0.00, not 3.00e-12.
    */
   reference?: number;
+  /** Fixed decimals; overrides `significant` and `reference`. */
+  decimals?: number;
 }
 
 /**
@@ -27,6 +29,7 @@ export interface NumberFormatOptions {
  * formatNumber(47.656098);            // "47.7"
  * formatNumber(-10.156098);           // "−10.2"
  * formatNumber(25, { reference: 80 }); // "25.0"
+ * formatNumber(14.14, { reference: 504 }); // "14.1"
  * formatNumber(1234.5);               // "1235" (no exponent for large stresses)
  */
 export function formatNumber(value: number, options: NumberFormatOptions = {}): string {
@@ -35,12 +38,26 @@ export function formatNumber(value: number, options: NumberFormatOptions = {}): 
   const significant = options.significant ?? 3;
   const reference = Math.abs(options.reference ?? value);
 
-  if (reference !== 0 && reference < 1e-3) {
-    const text = value.toExponential(significant - 1).replace('e+', 'e').replace('-', minus);
+  if (options.decimals === undefined && reference !== 0 && reference < 1e-3) {
+    const text = value
+      .toExponential(significant - 1)
+      .replace('e+', 'e')
+      .replace('-', minus);
     return text.replace(/e-/, `e${minus}`);
   }
-  const order = reference === 0 ? 0 : Math.floor(Math.log10(reference));
-  const decimals = Math.min(6, Math.max(0, significant - 1 - order));
+  const decimalsFor = (magnitude: number) =>
+    Math.min(
+      6,
+      Math.max(0, significant - 1 - (magnitude === 0 ? 0 : Math.floor(Math.log10(magnitude)))),
+    );
+  // With a reference: the number's own significant figures, but never more than one decimal
+  // finer than the reference needs (14.14 beside 504 prints 14.1; 3e-12 beside 80 prints 0.00).
+  const decimals =
+    options.decimals !== undefined
+      ? options.decimals
+      : options.reference === undefined
+        ? decimalsFor(reference)
+        : Math.min(decimalsFor(Math.abs(value) || reference), decimalsFor(reference) + 1);
   let text = value.toFixed(decimals);
   // Rounding can leave "-0.0": a value that prints as zero is zero.
   if (Number(text) === 0) text = text.replace('-', '');
@@ -78,7 +95,7 @@ export function formatStressNumber(
  * formatAngle(0.43249); // "24.8°"
  */
 export function formatAngle(angleRad: number): string {
-  return `${formatNumber((angleRad * 180) / Math.PI, { reference: 10, significant: 3 })}°`;
+  return `${formatNumber((angleRad * 180) / Math.PI, { decimals: 1 })}°`;
 }
 
 /**

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { niceStep, niceTicks } from './niceTicks';
+import { niceStep, niceTicks, stepDecimals, ticksForStep } from './niceTicks';
 
 describe('niceTicks', () => {
   it('steps by 20 across 0..100 asked for five intervals', () => {
@@ -41,5 +41,26 @@ describe('niceStep', () => {
     expect(niceStep(40, 5)).toBe(10); // raw 8 is nearer 10 than 5 on a log scale
     expect(niceStep(3, 10)).toBeCloseTo(0.2, 12);
     expect(niceStep(1000, 10)).toBe(100);
+  });
+});
+
+describe('ticksForStep', () => {
+  it('lists the multiples of a given step inside the range', () => {
+    expect(ticksForStep(-45, 85, 50)).toEqual([0, 50]);
+    expect(ticksForStep(-0.25, 0.3, 0.1)).toEqual([-0.2, -0.1, 0, 0.1, 0.2, 0.3]);
+  });
+
+  it('refuses a step that is not positive or absurdly small', () => {
+    expect(ticksForStep(0, 1, 0)).toEqual([]);
+    expect(ticksForStep(0, 1, 1e-9)).toEqual([]);
+  });
+});
+
+describe('stepDecimals', () => {
+  it('counts the decimals a step needs', () => {
+    expect(stepDecimals(20)).toBe(0);
+    expect(stepDecimals(1)).toBe(0);
+    expect(stepDecimals(0.5)).toBe(1);
+    expect(stepDecimals(0.02)).toBe(2);
   });
 });

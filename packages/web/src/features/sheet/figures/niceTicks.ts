@@ -15,12 +15,26 @@ export function niceTicks(min: number, max: number, count: number): number[] {
   const high = Math.max(min, max);
   if (low === high) return [low];
 
-  const step = niceStep(high - low, count);
+  return ticksForStep(low, high, niceStep(high - low, count));
+}
+
+/**
+ * The multiples of `step` inside [min, max], rounded to the step's decimals. Use it to give two
+ * axes of an equal-aspect plot the same step.
+ *
+ * @example
+ * ticksForStep(-45, 85, 50); // [0, 50]
+ */
+export function ticksForStep(min: number, max: number, step: number): number[] {
+  if (!Number.isFinite(min) || !Number.isFinite(max) || !(step > 0)) return [];
+  const low = Math.min(min, max);
+  const high = Math.max(min, max);
   // Enough decimals to print the step exactly (a step of 0.25 needs two, of 20 none).
-  const decimals = Math.max(0, -Math.floor(Math.log10(step)) + 1);
+  const decimals = stepDecimals(step) + 1;
   const tolerance = step * 1e-9;
   const first = Math.ceil((low - tolerance) / step);
   const last = Math.floor((high + tolerance) / step);
+  if (last - first > 10_000) return []; // a step far too small for the range
 
   const ticks: number[] = [];
   for (let k = first; k <= last; k++) {
@@ -28,6 +42,11 @@ export function niceTicks(min: number, max: number, count: number): number[] {
     ticks.push(value === 0 ? 0 : value); // no -0
   }
   return ticks;
+}
+
+/** Decimals needed to print multiples of a 1-2-5 step: 20 → 0, 0.5 → 1, 0.02 → 2. */
+export function stepDecimals(step: number): number {
+  return Math.max(0, -Math.floor(Math.log10(step) + 1e-9));
 }
 
 /**

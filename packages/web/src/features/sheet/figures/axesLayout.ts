@@ -1,0 +1,136 @@
+/**
+ * Layout of a figure's axes: a light frame round the plot box with tick labels outside it, a
+ * faint grid, and the two axes drawn through the origin with arrowheads and captions (placed
+ * by the figure together with its point labels). Both axes
+ * use the same tick step, as befits an equal-aspect plot.
+ */
+
+import type { ViewTransform } from './figureGeometry';
+import type { DisplayUnit } from './figureTypes';
+import { formatNumber } from './formatQuantity';
+import { niceStep, stepDecimals, ticksForStep } from './niceTicks';
+import { estimateTextWidth, labelHeight, type LabelRequest } from './placeLabels';
+
+export interface AxesOptions {
+  unit: DisplayUnit;
+  /** Caption at the positive end of the horizontal axis, e.g. "σ (MPa)". */
+  xCaption: string;
+  /** Caption at the positive end of the vertical axis. */
+  yCaption: string;
+  /**
+   * What the vertical axis reads at world height y: `ySign · y`. −1 makes the axis point down
+   * (its positive end at the bottom).
+   */
+  ySign: 1 | -1;
+  fontSize: number;
+  /** About this many screen units between ticks; default 64. */
+  tickSpacing?: number;
+}
+
+export interface AxisTick {
+  /** Screen position along the axis (x for the horizontal axis, y for the vertical one). */
+  at: number;
+  label: string;
+  /** The reading in display units. */
+  value: number;
+}
+
+export interface AxesLayout {
+  plot: { x0: number; y0: number; x1: number; y1: number };
+  xTicks: AxisTick[];
+  yTicks: AxisTick[];
+  /** Screen y of the horizontal axis (world y = 0), or null when 0 is out of view. */
+  xAxisAt: number | null;
+  /** Screen x of the vertical axis (world x = 0), or null when 0 is out of view. */
+  yAxisAt: number | null;
+  /** Which end of the vertical axis is positive. */
+  yPositive: 'up' | 'down';
+  /**
+   * The two axis captions as label requests (ids `x-caption`, `y-caption`), to be placed after
+   * the figure's own labels so they give way to them: the horizontal one above or below its
+   * axis's right end, the vertical one beside its axis's positive end.
+   */
+  captionRequests: LabelRequest[];
+  /** The axis lines, for the label placer. */
+  obstacleSegments: Array<{ x1: number; y1: number; x2: number; y2: number }>;
+}
+
+export function axesLayout(view: ViewTransform, options: AxesOptions): AxesLayout {
+  const { unit, ySign, fontSize } = options;
+  const plot = {
+    x0: view.plot.left,
+    y0: view.plot.top,
+    x1: view.plot.left + view.plot.width,
+    y1: view.plot.top + view.plot.height,
+  };
+  const { visible } = view;
+
+  // One step for both axes, chosen on the longer side.
+  const spacing = options.tickSpacing ?? 64;
+  const longer = view.plot.width >= view.plot.height;
+  const span = (longer ? visible.xMax - visible.xMin : visible.yMax - visible.yMin) * unit.perPa;
+  const pixels = longer ? view.plot.width : view.plot.height;
+  const step = niceStep(span, Math.max(2, pixels / spacing));
+  const decimals = stepDecimals(step);
+  const tickLabel = (value: number) =>
+    formatNumber(value, { reference: 1 / 10 ** decimals, significant: 1 });
+
+  const xTicks = ticksForStep(visible.xMin * unit.perPa, visible.xMax * unit.perPa, step).map(
+    (value) => ({ value, label: tickLabel(value), at: view.toScreen(value / unit.perPa, 0).x }),
+  );
+  const readingLow = ySign * visible.yMin * unit.perPa;
+  const readingHigh = ySign * visible.yMax * unit.perPa;
+  const yTicks = ticksForStep(readingLow, readingHigh, step).map((value) => ({
+    value,
+    label: tickLabel(value),
+    at: view.toScreen(0, (ySign * value) / unit.perPa).y,
+  }));
+
+  const origin = view.toScreen(0, 0);
+  const inside = (v: number, a: number, b: number) => v >= a - 0.5 && v <= b + 0.5;
+  const xAxisAt = inside(origin.y, plot.y0, plot.y1) ? origin.y : null;
+  const yAxisAt = inside(origin.x, plot.x0, plot.x1) ? origin.x : null;
+  const yPositive = ySign > 0 ? 'up' : 'down';
+
+  const height = labelHeight(fontSize);
+  const xLine = xAxisAt ?? plot.y1;
+  const xCaptionWidth = estimateTextWidth(options.xCaption, fontSize);
+  const yLine = yAxisAt ?? plot.x0;
+  const captionRequests: LabelRequest[] = [
+    {
+      id: 'x-caption',
+      text: options.xCaption,
+      x: plot.x1 - 8 - xCaptionWidth / 2,
+      y: xLine,
+      directions: xAxisAt === null ? [-Math.PI / 2] : [-Math.PI / 2, Math.PI / 2],
+      gap: 4,
+      fontSize,
+    },
+    {
+      id: 'y-caption',
+      text: options.yCaption,
+      x: yLine,
+      y: yPositive === 'up' ? plot.y0 + 4 + height / 2 : plot.y1 - 4 - height / 2,
+      directions: yAxisAt === null ? [0] : [0, Math.PI],
+      gap: 7,
+      fontSize,
+    },
+  ];
+
+  const obstacleSegments: AxesLayout['obstacleSegments'] = [];
+  if (xAxisAt !== null)
+    obstacleSegments.push({ x1: plot.x0, y1: xAxisAt, x2: plot.x1, y2: xAxisAt });
+  if (yAxisAt !== null)
+    obstacleSegments.push({ x1: yAxisAt, y1: plot.y0, x2: yAxisAt, y2: plot.y1 });
+
+  return {
+    plot,
+    xTicks,
+    yTicks,
+    xAxisAt,
+    yAxisAt,
+    yPositive,
+    captionRequests,
+    obstacleSegments,
+  };
+}
