@@ -1,7 +1,8 @@
 /**
  * Who is asking to co-edit which sheet, decided on the websocket upgrade request: express-session
- * and passport do not run on upgrades, so they are run here by hand, then the permission table
- * decides the role exactly as it does for `/api/sheets/:sheetId`.
+ * and passport do not run on upgrades, so the session is read here by hand and passport's session
+ * middleware run on it; then the permission table decides the role exactly as it does for
+ * `/api/sheets/:sheetId`.
  */
 import { ServerResponse, type IncomingMessage } from 'node:http';
 import type { Request, RequestHandler, Response } from 'express';
@@ -10,6 +11,7 @@ import { z } from 'zod';
 import { canEditSheet, decideAccess } from '../auth/permissions';
 import { awarenessUserOf } from './awarenessUser';
 import { COLLAB_CLOSE, type CollabCloseCode } from './closeCodes';
+import { readSession, type SessionSource } from './readSession';
 import type { ConnectionIdentity } from './SheetRoom';
 
 /** The path of the endpoint: `/collab/<sheet id>` (the y-websocket client appends the room name). */
@@ -27,8 +29,8 @@ export type UpgradeDecision =
 
 export interface UpgradeAuthorizerDeps {
   dataSource: DataSource;
-  /** The same session middleware the Express app uses (same store, cookie and secret). */
-  session: RequestHandler;
+  /** Where the app's sessions are: the same store, cookie name and secret. */
+  session: SessionSource;
   /** Passport's session middleware of the app's authenticator (`authenticator.session()`). */
   passportSession: RequestHandler;
   /** Origins browsers may open the websocket from. */
@@ -93,13 +95,18 @@ export async function authorizeUpgrade(request: IncomingMessage, deps: UpgradeAu
   };
 }
 
-/** Runs the app's session and passport middleware on the upgrade request; the user or null. */
+/**
+ * Loads the request's session, then runs passport's session middleware on it (the app's
+ * deserializeUser: a deleted user is no user); the signed-in user or null. Nothing is saved: the
+ * session is only read.
+ */
 async function signedInUser(request: IncomingMessage, deps: UpgradeAuthorizerDeps): Promise<Express.User | null> {
+  const session = await readSession(request, deps.session);
+  if (session === null) return null;
   const req = request as Request;
-  // The middleware may set headers on it but nothing is ever written: the answer is a websocket.
+  req.session = session as Request['session'];
+  // Passport may set headers on it but nothing is ever written: the answer is a websocket.
   const res = new ServerResponse(request) as unknown as Response;
-  await runMiddleware(deps.session, req, res);
-  if (req.session === undefined) return null;
   await runMiddleware(deps.passportSession, req, res);
   return req.user ?? null;
 }

@@ -5,7 +5,6 @@
  */
 import { STATUS_CODES, type IncomingMessage, type Server } from 'node:http';
 import type { Duplex } from 'node:stream';
-import session from 'express-session';
 import { SESSION_COOKIE } from '../app';
 import { createAuthenticator } from '../auth/passport';
 import type { AppDeps } from '../deps';
@@ -53,18 +52,11 @@ export function attachUpgradeHandlers(
   });
   collabServers.set(server, collab);
 
-  // The app's session store, cookie name and secret: only reading the session matters here.
-  // No cookie is ever sent back (the answer is a websocket), so cookie options are left out.
+  // The app's session store, cookie name and secret; sessions are only read here.
   const authenticator = createAuthenticator(deps);
   const authorizer: UpgradeAuthorizerDeps = {
     dataSource: deps.dataSource,
-    session: session({
-      name: SESSION_COOKIE,
-      secret: deps.config.sessionSecret,
-      store: deps.sessionStore,
-      resave: false,
-      saveUninitialized: false,
-    }),
+    session: { cookieName: SESSION_COOKIE, secret: deps.config.sessionSecret, store: deps.sessionStore },
     passportSession: authenticator.session(),
     isAllowedOrigin: originChecker(deps.urls.publicUrl, deps.config.nodeEnv === 'production'),
   };

@@ -132,6 +132,28 @@ describe('who may connect', () => {
     expect(server.collab.openSheetIds()).not.toContain(sheetId);
   });
 
+  it('refuses the cookie of a session that signed out, and of a user since deleted', async () => {
+    const sheetId = await createSheetWith(server.dataSource, organization, lugSheet(), users.engineer.id);
+    const leaving = await signedInUser(server.server, 'leaving');
+    const deleted = await signedInUser(server.server, 'deleted');
+    await server.dataSource.query(`INSERT INTO memberships (organization_id, user_id, role) VALUES ($1, $2, 'engineer'), ($1, $3, 'engineer')`, [
+      organization.organizationId,
+      leaving.id,
+      deleted.id,
+    ]);
+    const csrf = await fetch(`${server.url}/api/auth/csrf`, { headers: { cookie: leaving.cookie } });
+    const { token } = (await csrf.json()) as { token: string };
+    const response = await fetch(`${server.url}/api/auth/signout`, {
+      method: 'POST',
+      headers: { cookie: leaving.cookie, 'x-csrf-token': token, origin: server.url },
+    });
+    expect(response.status).toBe(204);
+    await refusedWith(open(sheetId, { cookie: leaving.cookie }), COLLAB_CLOSE.notSignedIn);
+
+    await server.dataSource.query(`DELETE FROM users WHERE id = $1`, [deleted.id]);
+    await refusedWith(open(sheetId, { cookie: deleted.cookie }), COLLAB_CLOSE.notSignedIn);
+  });
+
   it('answers a sheet that does not exist, or a malformed id, like a sheet of another organization', async () => {
     await refusedWith(open(randomUUID(), { cookie: users.owner.cookie }), COLLAB_CLOSE.notFound);
     await refusedWith(open('not-a-sheet-id', { cookie: users.owner.cookie }), COLLAB_CLOSE.notFound);
