@@ -114,17 +114,4 @@ export class TestClient {
     const response = await this.post('/api/auth/signin', { email, password });
     if (response.status !== 200) throw new Error(`sign-in as ${email} answered ${response.status}: ${response.text}`);
   }
-
-  /** Follows redirects from `url` (this server and the fake provider share it) until a non-redirect or `stopAt` path. */
-  async followRedirects(url: string, options: { maxHops?: number } = {}): Promise<{ final: TestResponse; hops: string[] }> {
-    const hops: string[] = [];
-    let current = url;
-    for (let i = 0; i < (options.maxHops ?? 10); i += 1) {
-      const response = await this.request('GET', current);
-      hops.push(current);
-      if (response.status < 300 || response.status >= 400 || !response.location) return { final: response, hops };
-      current = new URL(response.location, current).toString();
-    }
-    throw new Error(`too many redirects from ${url}: ${hops.join(' -> ')}`);
-  }
 }
