@@ -22,6 +22,11 @@ export interface CollabServerOptions {
   maxStoreRetryDelayMs?: number;
   /** Largest websocket message accepted (default 16 MiB: a sheet with inline point rows is big). */
   maxMessageBytes?: number;
+  /**
+   * How often every socket is pinged (default 30 s). One that has not answered the previous ping
+   * is cut, so a client that vanished without closing does not keep its room loaded.
+   */
+  pingIntervalMs?: number;
 }
 
 interface RoomSlot {
@@ -37,9 +42,13 @@ export class CollabServer {
   private readonly websockets: WebSocketServer;
   private readonly roomOptions: RoomOptions;
   private closing = false;
+  private readonly unanswered = new WeakSet<WebSocket>();
+  private pinger: NodeJS.Timeout;
 
   constructor(private readonly options: CollabServerOptions) {
     this.websockets = new WebSocketServer({ noServer: true, maxPayload: options.maxMessageBytes ?? 16 * 1024 * 1024 });
+    this.pinger = setInterval(() => this.pingAll(), options.pingIntervalMs ?? 30_000);
+    this.pinger.unref();
     this.roomOptions = {
       persistence: options.persistence,
       logger: options.logger,
@@ -50,9 +59,17 @@ export class CollabServer {
     };
   }
 
-  /** Change the compaction and retry settings, for open rooms too (tests and benchmarks tune these). */
-  configure(settings: Partial<Pick<RoomOptions, 'compactAfterUpdates' | 'compactAfterIdleMs' | 'maxStoreRetryDelayMs'>>): void {
-    Object.assign(this.roomOptions, settings);
+  /** Change the compaction, retry and ping settings, for open rooms too (tests and benchmarks tune these). */
+  configure(
+    settings: Partial<Pick<RoomOptions, 'compactAfterUpdates' | 'compactAfterIdleMs' | 'maxStoreRetryDelayMs'>> & { pingIntervalMs?: number },
+  ): void {
+    const { pingIntervalMs, ...room } = settings;
+    Object.assign(this.roomOptions, room);
+    if (pingIntervalMs !== undefined && !this.closing) {
+      clearInterval(this.pinger);
+      this.pinger = setInterval(() => this.pingAll(), pingIntervalMs);
+      this.pinger.unref();
+    }
   }
 
   /** True once close() was called: new connections are turned away with `shuttingDown`. */
@@ -103,6 +120,7 @@ export class CollabServer {
    */
   async close(timeoutMs = 10_000): Promise<void> {
     this.closing = true;
+    clearInterval(this.pinger);
     for (const slot of this.rooms.values()) {
       void slot.room.then((room) => room.closeConnections(COLLAB_CLOSE.shuttingDown)).catch(() => undefined);
     }
@@ -133,6 +151,7 @@ export class CollabServer {
       earlier.push(Array.isArray(data) ? Buffer.concat(data) : new Uint8Array(data as ArrayBuffer));
     };
     websocket.on('message', keep);
+    websocket.on('pong', () => this.unanswered.delete(websocket));
     websocket.on('error', (error) =>
       this.options.logger.warn({ err: error, sheetId, userId: identity.user.id }, 'collab socket error'),
     );
@@ -160,6 +179,17 @@ export class CollabServer {
     websocket.on('close', () => this.leave(sheetId, slot));
     room.addConnection(websocket, identity, earlier);
     this.metrics.connectionsOpened++;
+  }
+
+  private pingAll(): void {
+    for (const websocket of this.websockets.clients) {
+      if (this.unanswered.has(websocket)) {
+        websocket.terminate();
+        continue;
+      }
+      this.unanswered.add(websocket);
+      websocket.ping();
+    }
   }
 
   private slotFor(sheetId: string): RoomSlot {

@@ -181,7 +181,7 @@ export class SheetRoom {
   }
 
   private handleMessage(connection: Connection, data: Uint8Array): void {
-    if (!this.connections.has(connection.socket)) return;
+    if (this.destroyed || !this.connections.has(connection.socket)) return;
     try {
       const message = decodeClientMessage(data);
       switch (message.type) {
