@@ -14,12 +14,12 @@ export function AppShell() {
   return (
     <div className="flex flex-1 flex-col">
       <TopBar user={me.data.user} />
-      <div className="flex flex-1">
+      <div className="flex flex-1 flex-col md:flex-row">
         <SideNav />
         <main
           id="main"
           tabIndex={-1}
-          className="min-w-0 flex-1 px-3 py-3 outline-none sm:px-5 sm:py-4"
+          className="min-w-0 flex-1 px-3 py-3 outline-none sm:px-5 sm:py-4 print:p-0"
         >
           <Outlet />
         </main>

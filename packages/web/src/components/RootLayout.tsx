@@ -4,7 +4,7 @@ import { CautionFooter } from './CautionFooter';
 /** Every page: its content, then the caution footer. */
 export function RootLayout() {
   return (
-    <div className="flex min-h-screen flex-col bg-frame">
+    <div className="flex min-h-screen flex-col bg-frame print:bg-white">
       <a
         href="#main"
         className="sr-only z-50 rounded-[3px] bg-paper px-3 py-2 text-ink focus:not-sr-only focus:absolute focus:top-2 focus:left-2"

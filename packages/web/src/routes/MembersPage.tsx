@@ -44,7 +44,7 @@ function MemberRoster({ membership }: { membership: Membership }) {
       <Paper>
         <PageHeader
           title="Members"
-          subtitle={`People in ${membership.organization.name}. You are ${ROLE_INFO[membership.role].label.toLowerCase()}.`}
+          subtitle={`${membership.organization.name} · your role: ${ROLE_INFO[membership.role].label}`}
         />
         {changeRole.isError ? (
           <FormAlert title="The role was not changed">{describeError(changeRole.error)}</FormAlert>

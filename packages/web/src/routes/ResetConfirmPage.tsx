@@ -52,16 +52,21 @@ export function ResetConfirmPage() {
     );
   }
 
-  const expired = isApiError(confirmReset.error) && confirmReset.error.status === 410;
-  const server = splitServerError(confirmReset.error, { password: 'New password' });
+  const error = confirmReset.error;
+  const expired = isApiError(error) && error.status === 410;
+  // The server names the token when the link is unknown or already used.
+  const unusable = isApiError(error) && error.fieldErrors.token !== undefined;
+  const server = splitServerError(error, { password: 'New password' });
 
   return (
     <>
       <h1 className="mb-1 text-[1.25rem]">Choose a new password</h1>
       <p className="mb-5 text-ink-muted">For the account this reset link was sent to.</p>
-      {expired ? (
-        <FormAlert title="This reset link has expired">
-          Links work for a limited time and only once.{' '}
+      {expired || unusable ? (
+        <FormAlert
+          title={expired ? 'This reset link has expired' : 'This reset link cannot be used'}
+        >
+          {expired ? 'Links work for a limited time and only once.' : error.fieldErrors.token}{' '}
           <Link to="/reset" className="underline">
             Request a new link
           </Link>

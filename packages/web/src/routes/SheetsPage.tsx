@@ -1,7 +1,7 @@
 import { useEffect, useRef, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { useOrganizationSheets } from '../api/sheets';
-import type { Membership, SheetStatus } from '../api/types';
+import { can, type Membership, type SheetStatus } from '../api/types';
 import { ErrorPanel } from '../components/ErrorPanel';
 import { Loading } from '../components/Loading';
 import { PageHeader } from '../components/PageHeader';
@@ -75,9 +75,11 @@ function SheetRegister({ membership }: { membership: Membership }) {
         title="Sheets"
         subtitle={`Calculation sheets of ${membership.organization.name}`}
         actions={
-          <Link to="/projects" className="btn">
-            New sheet in a project
-          </Link>
+          can(membership.role, 'sheet.create') ? (
+            <Link to="/projects" className="btn">
+              New sheet in a project
+            </Link>
+          ) : undefined
         }
       />
       <div
