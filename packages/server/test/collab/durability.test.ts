@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import WebSocket from 'ws';
 import * as Y from 'yjs';
 import { COLLAB_CLOSE } from '../../src/collab/closeCodes';
 import { cellText, sheetContentFromDoc } from '../../src/collab/sheetDoc';
@@ -120,6 +121,33 @@ describe('durability of edits', () => {
     expect(a.closes[0]?.code).toBe(COLLAB_CLOSE.badRequest);
     await waitForUnload(server, sheetId);
     expect((await readStoredSheet(server.dataSource, sheetId)).logRows).toBe(0);
+  });
+});
+
+describe('dead connections', () => {
+  it('cuts a socket that stops answering pings, and unloads its room', async () => {
+    const sheetId = await createSheetWith(server.dataSource, organization, lugSheet(), ada.id);
+    const healthy = open(sheetId, ben);
+    await healthy.synced();
+    // A client whose machine went away: its socket never answers a ping.
+    const silent = new WebSocket(`${server.collabUrl}/${sheetId}`, { headers: { cookie: ada.cookie, origin: server.url }, autoPong: false });
+    await new Promise((resolve, reject) => {
+      silent.once('open', resolve);
+      silent.once('error', reject);
+    });
+    await waitFor('both connections in the room', async () => (await server.collab.loadedRoom(sheetId))?.connectionCount === 2);
+    const closed = new Promise<number>((resolve) => silent.once('close', (code) => resolve(code)));
+    server.collab.configure({ pingIntervalMs: 100 });
+    try {
+      expect(await closed).toBe(1006);
+      await waitFor('the silent socket to leave the room', async () => (await server.collab.loadedRoom(sheetId))?.connectionCount === 1);
+      // The healthy client answered every ping and is still there.
+      expect(healthy.closes).toEqual([]);
+    } finally {
+      server.collab.configure({ pingIntervalMs: 30_000 });
+    }
+    healthy.destroy();
+    await waitForUnload(server, sheetId);
   });
 });
 
