@@ -9,9 +9,9 @@
  *   functions that throw, so an expression cannot call them. The engine keeps its own references
  *   to `parse` and `compile`, taken before the replacement.
  */
-import { all, create, type EvalFunction, type MathNode, type Unit } from 'mathjs';
+import { all, create, type EvalFunction, type FactoryFunctionMap, type MathNode, type Unit } from 'mathjs';
 
-const math = create(all, { number: 'number', predictable: true });
+const math = create(all as FactoryFunctionMap, { number: 'number', predictable: true });
 
 // From the exact definitions (1 lbf = 4.4482216152605 N, 1 in = 0.0254 m): mathjs rounds its
 // built-in psi (6894.75729276459 Pa) and kip (4448.2216 N) to fewer digits.
