@@ -6,6 +6,7 @@
 import type { IncomingMessage } from 'node:http';
 import type { Duplex } from 'node:stream';
 import WebSocket, { WebSocketServer } from 'ws';
+import type * as Y from 'yjs';
 import { COLLAB_CLOSE, COLLAB_CLOSE_REASON, type CollabCloseCode } from './closeCodes';
 import { createCollabMetrics, type CollabLogger, type CollabMetrics } from './collabMetrics';
 import { SheetGoneError, SheetRoom, type ConnectionIdentity, type RoomOptions, type RoomPersistence } from './SheetRoom';
@@ -95,6 +96,25 @@ export class CollabServer {
   async liveContent(sheetId: string): Promise<SheetFileContent | null> {
     const room = await this.loadedRoom(sheetId);
     return room === undefined ? null : sheetContentFromDoc(room.doc);
+  }
+
+  /**
+   * Change a sheet's live document from the server (a REST request that edits the sheet, say):
+   * opens the room if nobody has it open, runs `edit` as a server edit (stored, then relayed to
+   * everyone connected), and lets the room unload again. Throws SheetGoneError for a missing sheet.
+   *
+   * @example collab.editSheet(sheetId, (doc) => insertCell(doc, 0, cell), userId)
+   */
+  async editSheet(sheetId: string, edit: (doc: Y.Doc) => void, userId: string | null): Promise<void> {
+    if (this.closing) throw new Error('editSheet: the co-editing server is shutting down');
+    const slot = this.slotFor(sheetId);
+    slot.users++;
+    try {
+      const room = await slot.room;
+      await room.applyServerEdit(edit, userId);
+    } finally {
+      this.leave(sheetId, slot);
+    }
   }
 
   /** Complete the websocket handshake for an authorized request and put the socket in the sheet's room. */

@@ -13,6 +13,7 @@ import * as Y from 'yjs';
 import type { AwarenessUser } from './awarenessUser';
 import { stampAwarenessEntries } from './awarenessUser';
 import { COLLAB_CLOSE, COLLAB_CLOSE_REASON, type CollabCloseCode } from './closeCodes';
+import { sheetMeta } from './sheetDoc';
 import type { CollabLogger, CollabMetrics } from './collabMetrics';
 import {
   awarenessMessage,
@@ -35,17 +36,20 @@ export class SheetGoneError extends Error {
 /** What a room needs from the database. */
 export interface RoomPersistence {
   /**
-   * The sheet's stored state with every logged update applied, and how many log rows that took.
-   * Throws SheetGoneError when there is no such sheet.
+   * The sheet's stored state with every logged update applied, how many log rows that took, and
+   * the sheet's title (`sheets.title`). Throws SheetGoneError when there is no such sheet.
    */
-  load(sheetId: string): Promise<{ state: Uint8Array; logRows: number }>;
+  load(sheetId: string): Promise<{ state: Uint8Array; logRows: number; title: string }>;
   /**
    * Append updates to the log, in order, in one statement. Resolves once they are committed;
    * throws SheetGoneError when the sheet was deleted.
    */
   append(sheetId: string, updates: readonly LoggedUpdate[]): Promise<void>;
-  /** Fold the log into the stored state (reading both from the database, not from the room). */
-  compact(sheetId: string): Promise<{ foldedRows: number }>;
+  /**
+   * Fold the log into the stored state (reading both from the database, not from the room).
+   * Also gives the sheet's title then, or null when the sheet is gone.
+   */
+  compact(sheetId: string): Promise<{ foldedRows: number; title: string | null }>;
 }
 
 export interface LoggedUpdate {
@@ -80,7 +84,9 @@ interface Connection {
 
 interface QueuedUpdate {
   update: Uint8Array;
-  origin: Connection;
+  /** The connection it came from; null for an edit made by the server itself. */
+  origin: Connection | null;
+  userId: string | null;
 }
 
 /** Updates stored per INSERT at most, so one statement stays small under a burst. */
@@ -120,8 +126,10 @@ export class SheetRoom {
 
   /** Load the sheet from the database and open a room for it. */
   static async open(sheetId: string, options: RoomOptions): Promise<SheetRoom> {
-    const { state, logRows } = await options.persistence.load(sheetId);
-    return new SheetRoom(sheetId, state, logRows, options);
+    const { state, logRows, title } = await options.persistence.load(sheetId);
+    const room = new SheetRoom(sheetId, state, logRows, options);
+    room.followStoredTitle(title);
+    return room;
   }
 
   get connectionCount(): number {
@@ -161,6 +169,23 @@ export class SheetRoom {
     while (this.draining !== null) await this.draining;
   }
 
+  /**
+   * Change the document on the server's side (a REST request, say): `edit` runs on a copy, and
+   * the resulting update takes the same path as a client's — stored, then applied and relayed to
+   * everyone. Resolves once it is stored and applied.
+   */
+  async applyServerEdit(edit: (doc: Y.Doc) => void, userId: string | null): Promise<void> {
+    if (this.destroyed) throw new Error(`applyServerEdit: the room of sheet ${this.sheetId} is closed`);
+    const copy = new Y.Doc();
+    Y.applyUpdate(copy, Y.encodeStateAsUpdate(this.doc));
+    const before = Y.encodeStateVector(copy);
+    edit(copy);
+    const update = Y.encodeStateAsUpdate(copy, before);
+    copy.destroy();
+    this.enqueue(update, null, userId);
+    await this.flush();
+  }
+
   /** Compact now, unless nothing was logged since the last compaction; resolves when done. */
   async compactNow(): Promise<void> {
     this.clearIdleTimer();
@@ -194,7 +219,7 @@ export class SheetRoom {
             this.options.metrics.readOnlyUpdatesDropped++;
             return;
           }
-          this.enqueue(connection, message.update);
+          this.enqueue(message.update, connection, connection.identity.user.id);
           return;
         case 'awareness':
           this.applyAwareness(connection, message.update);
@@ -217,11 +242,11 @@ export class SheetRoom {
    * first, so a reconnecting client's sync step 2 logs only what is new. Throws on an update
    * that does not decode: it must never reach the log, or every later load would fail on it.
    */
-  private enqueue(origin: Connection, received: Uint8Array): void {
+  private enqueue(received: Uint8Array, origin: Connection | null, userId: string | null): void {
     const update = Y.diffUpdate(received, Y.encodeStateVector(this.doc));
     const decoded = Y.decodeUpdate(update);
     if (decoded.structs.length === 0 && decoded.ds.clients.size === 0) return;
-    this.queue.push({ update, origin });
+    this.queue.push({ update, origin, userId });
     this.startDraining();
   }
 
@@ -254,7 +279,7 @@ export class SheetRoom {
     }
   }
 
-  private apply(update: Uint8Array, origin: Connection): void {
+  private apply(update: Uint8Array, origin: Connection | null): void {
     try {
       Y.applyUpdate(this.doc, update, origin);
     } catch (error) {
@@ -264,7 +289,7 @@ export class SheetRoom {
   }
 
   private async storeWithRetry(batch: readonly QueuedUpdate[]): Promise<void> {
-    const updates = batch.map(({ update, origin }) => ({ update, userId: origin.identity.user.id }));
+    const updates = batch.map(({ update, userId }) => ({ update, userId }));
     for (let attempt = 1; ; attempt++) {
       try {
         await this.options.persistence.append(this.sheetId, updates);
@@ -306,8 +331,9 @@ export class SheetRoom {
     const rowsBefore = this.logRowsSinceCompaction;
     this.compacting = this.options.persistence
       .compact(this.sheetId)
-      .then(() => {
+      .then(({ title }) => {
         this.options.metrics.compactions++;
+        this.followStoredTitle(title);
         // Rows appended while the compaction ran may or may not be folded in; counting them again
         // only brings the next compaction forward.
         this.logRowsSinceCompaction = Math.max(0, this.logRowsSinceCompaction - rowsBefore);
@@ -323,6 +349,17 @@ export class SheetRoom {
           this.requestCompaction();
         }
       });
+  }
+
+  /**
+   * The title block belongs to the REST API (`sheets.title`); the document's `meta.title` follows
+   * it, by a server edit whenever a load or a compaction finds the two apart.
+   */
+  private followStoredTitle(title: string | null): void {
+    if (title === null || this.destroyed || this.gone || sheetMeta(this.doc).get('title') === title) return;
+    this.applyServerEdit((doc) => sheetMeta(doc).set('title', title), null).catch((error: unknown) =>
+      this.options.logger.error({ err: error, sheetId: this.sheetId }, 'could not bring the title in line with the sheet'),
+    );
   }
 
   private clearIdleTimer(): void {

@@ -21,6 +21,7 @@ const LOCK_SHEET = `SELECT pg_advisory_xact_lock(hashtextextended('sheaf.sheet-d
 interface StoredSheet {
   yjs_state: Buffer | null;
   content: SheetFileContent;
+  title: string;
 }
 
 export class PostgresSheetPersistence implements RoomPersistence {
@@ -34,7 +35,7 @@ export class PostgresSheetPersistence implements RoomPersistence {
    * cannot fold and delete rows between the two reads. A sheet never co-edited before gets its
    * state built from `content` and stored first.
    */
-  async load(sheetId: string): Promise<{ state: Uint8Array; logRows: number }> {
+  async load(sheetId: string): Promise<{ state: Uint8Array; logRows: number; title: string }> {
     return this.dataSource.transaction(async (manager) => {
       await manager.query(LOCK_SHEET, [sheetId]);
       const sheet = await this.readSheet(manager, sheetId);
@@ -50,7 +51,7 @@ export class PostgresSheetPersistence implements RoomPersistence {
       const doc = this.docFromStored(sheetId, sheet, rows.map((row) => row.update));
       const state = Y.encodeStateAsUpdate(doc);
       doc.destroy();
-      return { state, logRows: rows.length };
+      return { state, logRows: rows.length, title: sheet.title };
     });
   }
 
@@ -74,8 +75,11 @@ export class PostgresSheetPersistence implements RoomPersistence {
    * under the sheet's lock, reading everything from the database (never from a room's memory).
    * `DELETE ... RETURNING` reads and removes exactly the same rows: an append that commits while
    * this runs is neither folded nor deleted, and waits for the next compaction.
+   *
+   * The title written into `content` is `sheets.title`: the title block belongs to the REST API,
+   * and the room brings the document's `meta.title` in line with it (see SheetRoom).
    */
-  async compact(sheetId: string): Promise<{ foldedRows: number }> {
+  async compact(sheetId: string): Promise<{ foldedRows: number; title: string | null }> {
     return this.dataSource.transaction(async (manager) => {
       await manager.query(LOCK_SHEET, [sheetId]);
       let sheet: StoredSheet;
@@ -83,7 +87,7 @@ export class PostgresSheetPersistence implements RoomPersistence {
         sheet = await this.readSheet(manager, sheetId);
       } catch (error) {
         // Deleted: its log went with it (ON DELETE CASCADE).
-        if (error instanceof SheetGoneError) return { foldedRows: 0 };
+        if (error instanceof SheetGoneError) return { foldedRows: 0, title: null };
         throw error;
       }
       // The structured result: TypeORM's plain one for a DELETE is [rows, rowCount].
@@ -93,22 +97,22 @@ export class PostgresSheetPersistence implements RoomPersistence {
       const rows = (deleted.records as Array<{ id: string; update: Buffer }>).sort((a, b) =>
         compareBigintText(a.id, b.id),
       );
-      if (rows.length === 0 && sheet.yjs_state !== null) return { foldedRows: 0 };
+      if (rows.length === 0 && sheet.yjs_state !== null) return { foldedRows: 0, title: sheet.title };
       const doc = this.docFromStored(sheetId, sheet, rows.map((row) => row.update));
       const state = Buffer.from(Y.encodeStateAsUpdate(doc));
-      const content = sheetContentFromDoc(doc);
+      const content = { ...sheetContentFromDoc(doc), title: sheet.title };
       doc.destroy();
       await manager.query(`UPDATE sheets SET yjs_state = $2, content = $3::jsonb, updated_at = now() WHERE id = $1`, [
         sheetId,
         state,
         JSON.stringify(content),
       ]);
-      return { foldedRows: rows.length };
+      return { foldedRows: rows.length, title: sheet.title };
     });
   }
 
   private async readSheet(manager: EntityManager, sheetId: string): Promise<StoredSheet> {
-    const rows: StoredSheet[] = await manager.query(`SELECT yjs_state, content FROM sheets WHERE id = $1 FOR UPDATE`, [
+    const rows: StoredSheet[] = await manager.query(`SELECT yjs_state, content, title FROM sheets WHERE id = $1 FOR UPDATE`, [
       sheetId,
     ]);
     const sheet = rows[0];

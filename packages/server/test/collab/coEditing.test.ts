@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as Y from 'yjs';
-import { cellText, insertCell, sheetContentFromDoc, type SheetFileContent } from '../../src/collab/sheetDoc';
+import { cellText, insertCell, sheetContentFromDoc, sheetMeta, type SheetFileContent } from '../../src/collab/sheetDoc';
 import {
+  apiRequest,
   connectClient,
   createOrganizationWith,
   createSheetWith,
@@ -204,5 +205,51 @@ describe('co-editing a sheet', () => {
     await waitFor('ada to leave ben\'s presence list', () => !ben.provider.awareness.getStates().has(ada.doc.clientID));
     ben.destroy();
     await waitForUnload(server, sheetId);
+  });
+});
+
+describe('the server editing a sheet', () => {
+  it('brings the document\'s title in line with a rename through the API', async () => {
+    const sheetId = await createSheetWith(server.dataSource, organization, lugSheet(), engineers[0]!.id);
+    const ada = open(sheetId, engineers[0]!);
+    await ada.synced();
+    const renamed = await apiRequest(server, engineers[0]!, 'PATCH', `/api/sheets/${sheetId}`, { title: 'Lifting lug, revised weld' });
+    expect(renamed.status).toBe(200);
+    // A title typed into the document does not win over the title block either.
+    sheetMeta(ada.doc).set('title', 'typed in the document');
+    await waitFor('the typed title to be stored', async () => (await readStoredSheet(server.dataSource, sheetId)).logRows > 0);
+    await server.collab.loadedRoom(sheetId).then((room) => room?.compactNow());
+    await waitFor('the title to follow the rename', () => sheetMeta(ada.doc).get('title') === 'Lifting lug, revised weld');
+    ada.destroy();
+    await waitForUnload(server, sheetId);
+    const stored = await readStoredSheet(server.dataSource, sheetId);
+    expect(stored.content.title).toBe('Lifting lug, revised weld');
+    expect(sheetMeta(stored.doc).get('title')).toBe('Lifting lug, revised weld');
+
+    // Renamed while nobody has it open: the next load fixes the document at once.
+    expect((await apiRequest(server, engineers[1]!, 'PATCH', `/api/sheets/${sheetId}`, { title: 'Lifting lug, final' })).status).toBe(200);
+    const ben = open(sheetId, engineers[1]!);
+    await waitFor('the loaded title to follow', () => sheetMeta(ben.doc).get('title') === 'Lifting lug, final');
+    ben.destroy();
+    await waitForUnload(server, sheetId);
+    expect((await readStoredSheet(server.dataSource, sheetId)).content.title).toBe('Lifting lug, final');
+  });
+
+  it('stores and relays a server edit, whether or not anyone has the sheet open', async () => {
+    const sheetId = await createSheetWith(server.dataSource, organization, lugSheet(), engineers[0]!.id);
+    const ada = open(sheetId, engineers[0]!);
+    await ada.synced();
+    await server.collab.editSheet(sheetId, (doc) => insertCell(doc, 0, { id: 'n0', kind: 'note', text: 'Imported from the test rig' }), engineers[2]!.id);
+    await waitFor('the server edit to reach the client', () => cellText(ada.doc, 'n0', 'text')?.toString() === 'Imported from the test rig');
+    const rows = (await server.dataSource.query(`SELECT user_id FROM sheet_updates WHERE sheet_id = $1`, [sheetId])) as Array<{ user_id: string | null }>;
+    expect(rows).toEqual([{ user_id: engineers[2]!.id }]);
+    ada.destroy();
+    await waitForUnload(server, sheetId);
+
+    await server.collab.editSheet(sheetId, (doc) => insertCell(doc, 99, { id: 'n9', kind: 'note', text: 'appended' }), null);
+    await waitForUnload(server, sheetId);
+    const stored = await readStoredSheet(server.dataSource, sheetId);
+    expect(stored.logRows).toBe(0);
+    expect(stored.content.cells.map((cell) => cell.id)).toEqual(['n0', 'k1', 'k2', 'k3', 'k4', 'k7', 'n9']);
   });
 });

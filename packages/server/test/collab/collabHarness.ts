@@ -95,6 +95,25 @@ export async function createSheetWith(dataSource: DataSource, organization: Test
   return sheet.id;
 }
 
+/** A JSON request to the API as `user` (with the session's CSRF token and the page's Origin). */
+export async function apiRequest(
+  server: CollabEndpoint,
+  user: CollabUser,
+  method: string,
+  path: string,
+  body?: unknown,
+): Promise<{ status: number; body: unknown }> {
+  const csrf = await fetch(`${server.url}/api/auth/csrf`, { headers: { cookie: user.cookie } });
+  const { token } = (await csrf.json()) as { token: string };
+  const response = await fetch(`${server.url}${path}`, {
+    method,
+    headers: { cookie: user.cookie, 'x-csrf-token': token, origin: server.url, 'content-type': 'application/json' },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  const text = await response.text();
+  return { status: response.status, body: text ? (JSON.parse(text) as unknown) : null };
+}
+
 /** The lifting-lug sheet most tests start from. */
 export function lugSheet(): SheetFileContent {
   return {
