@@ -204,7 +204,7 @@ describe('rate limits on sign-in, with the limits used in production', () => {
   let server: TestServer;
 
   beforeAll(async () => {
-    server = await startTestServer({ overrides: { rateLimits: { signInPerAccount: 20, signInPerIp: 30 } } });
+    server = await startTestServer({ overrides: { rateLimits: { signInPerAccount: 20, signInPerIp: 30, signUpPerIp: 2, resetPerIp: 3 } } });
   });
   afterAll(async () => {
     await server?.close();
@@ -245,6 +245,26 @@ describe('rate limits on sign-in, with the limits used in production', () => {
       429,
       'rate-limited',
       'too many failed sign-ins from this network address; wait 15 minutes and try again',
+    );
+  });
+
+  it('limits sign-ups and reset requests per network address', async () => {
+    const client = server.client();
+    for (let i = 0; i < 2; i += 1) {
+      expect((await client.post('/api/auth/signup', { email: uniqueEmail('limited'), password: TEST_PASSWORD, name: 'Limited' })).status).toBe(201);
+    }
+    expectError(
+      await client.post('/api/auth/signup', { email: uniqueEmail('limited'), password: TEST_PASSWORD, name: 'Limited' }),
+      429,
+      'rate-limited',
+      'too many sign-ups from this network address; wait 15 minutes and try again',
+    );
+    for (let i = 0; i < 3; i += 1) expect((await client.post('/api/auth/reset/request', { email: uniqueEmail() })).status).toBe(202);
+    expectError(
+      await client.post('/api/auth/reset/request', { email: uniqueEmail() }),
+      429,
+      'rate-limited',
+      'too many password reset requests from this network address; wait 15 minutes and try again',
     );
   });
 });

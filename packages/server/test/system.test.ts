@@ -150,3 +150,46 @@ describe('health, OpenAPI and the shape of errors', () => {
     expect(status).toBe(404);
   });
 });
+
+describe('in production', () => {
+  let server: TestServer;
+
+  beforeAll(async () => {
+    server = await startTestServer({
+      env: {
+        NODE_ENV: 'production',
+        SESSION_SECRET: 'a production-length secret for this test only',
+        PUBLIC_URL: 'https://calcs.northgate.test',
+        // Never contacted: this test sends no mail.
+        SMTP_URL: 'smtp://127.0.0.1:9',
+      },
+    });
+  });
+  afterAll(async () => {
+    await server?.close();
+  });
+
+  it('mounts none of the local fakes and turns provider sign-in off', async () => {
+    const client = server.client();
+    expect(server.deps.devInbox).toBeNull();
+    expect((await client.get('/api/dev/mail')).status).toBe(404);
+    expect((await client.get('/dev/mail')).status).toBe(404);
+    expect((await client.get('/fake-oauth/authorize?client_id=sheaf-dev-client')).status).toBe(404);
+    const github = await client.get('/auth/github');
+    expect(github.status).toBe(302);
+    expect(github.location).toBe('/signin?error=github-not-configured');
+    const doc = (await client.get('/api/openapi.json')).body as { paths: Record<string, unknown> };
+    expect(doc.paths['/api/dev/mail']).toBeUndefined();
+  });
+
+  it('marks the session cookie Secure behind one TLS proxy hop, and sends HSTS', async () => {
+    const response = await server.client().get('/api/auth/csrf', { headers: { 'x-forwarded-proto': 'https' } });
+    const cookie = response.headers.getSetCookie().find((c) => c.startsWith('sheaf.sid='));
+    expect(cookie).toMatch(/; HttpOnly/);
+    expect(cookie).toMatch(/; Secure/);
+    expect(cookie).toMatch(/; SameSite=Lax/);
+    expect(response.headers.get('strict-transport-security')).toContain('max-age=');
+    expect(response.headers.get('content-security-policy')).toContain('upgrade-insecure-requests');
+  });
+});
+

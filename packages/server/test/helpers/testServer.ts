@@ -34,6 +34,7 @@ export async function startTestServer(
   return {
     ...running,
     routes: running.app.locals.routes as Route[],
-    client: () => new TestClient(running.url),
+    // The address the server listens on: in tests PUBLIC_URL may name a host nobody resolves.
+    client: () => new TestClient(running.deps.urls.internalUrl),
   };
 }
