@@ -1,32 +1,17 @@
 import type { AxesLayout } from './axesLayout';
-import type { PlacedLabel } from './placeLabels';
-import {
-  figureFrame,
-  figureGrid,
-  figureInk,
-  figureInkMuted,
-  figurePaper,
-  numberFont,
-  textFont,
-  tickFontSize,
-} from './figurePalette';
+import { figureFrame, figureGrid, figureInkMuted, numberFont, tickFontSize } from './figurePalette';
 
 export interface FigureAxesProps {
   layout: AxesLayout;
-  /** The placed `captionRequests` of the layout. */
-  captions: PlacedLabel[];
-  fontSize: number;
 }
 
 /**
- * The frame, grid, ticks and the two axes through the origin of an `axesLayout`. Tick labels sit
- * outside the frame so they never collide with what is drawn inside.
+ * The frame, grid and ticks of an `axesLayout`, drawn first. Tick labels sit outside the frame
+ * so they never collide with what is drawn inside. The axes themselves are `AxisLines`, drawn
+ * over filled areas.
  */
-export function FigureAxes({ layout, captions, fontSize }: FigureAxesProps) {
-  const { plot, xTicks, yTicks, xAxisAt, yAxisAt, yPositive } = layout;
-  const arrow = 5;
-  const xLine = xAxisAt ?? plot.y1;
-  const yLine = yAxisAt ?? plot.x0;
+export function FigureAxes({ layout }: FigureAxesProps) {
+  const { plot, xTicks, yTicks } = layout;
   return (
     <g data-part="axes">
       <rect
@@ -77,42 +62,6 @@ export function FigureAxes({ layout, captions, fontSize }: FigureAxesProps) {
             textAnchor="end"
           >
             {tick.label}
-          </text>
-        ))}
-      </g>
-      <g stroke={figureInk} strokeWidth={1} fill={figureInk}>
-        {xAxisAt !== null && <line x1={plot.x0} y1={xAxisAt} x2={plot.x1} y2={xAxisAt} />}
-        {yAxisAt !== null && <line x1={yAxisAt} y1={plot.y0} x2={yAxisAt} y2={plot.y1} />}
-        {/* Arrowheads mark each axis's positive end; on the frame when the axis is out of view. */}
-        <path
-          data-part="x-arrow"
-          d={`M${plot.x1} ${xLine}l${-arrow * 1.6} ${-arrow * 0.7}v${arrow * 1.4}Z`}
-          stroke="none"
-        />
-        <path
-          data-part="y-arrow"
-          d={
-            yPositive === 'up'
-              ? `M${yLine} ${plot.y0}l${-arrow * 0.7} ${arrow * 1.6}h${arrow * 1.4}Z`
-              : `M${yLine} ${plot.y1}l${-arrow * 0.7} ${-arrow * 1.6}h${arrow * 1.4}Z`
-          }
-          stroke="none"
-        />
-      </g>
-      <g fill={figureInk} fontFamily={textFont} fontSize={fontSize}>
-        {captions.map((caption) => (
-          <text
-            key={caption.id}
-            data-part={caption.id}
-            x={caption.x}
-            y={caption.y}
-            textAnchor="middle"
-            paintOrder="stroke"
-            stroke={figurePaper}
-            strokeWidth={3}
-            strokeLinejoin="round"
-          >
-            {caption.text}
           </text>
         ))}
       </g>

@@ -1,15 +1,9 @@
 import { useCallback, useId, useMemo, useRef } from 'react';
+import { AxisLines } from './AxisLines';
 import { FigureAxes } from './FigureAxes';
 import { FigureLabels } from './FigureLabels';
 import { rotationFromPlotPoint } from './figureGeometry';
-import {
-  figureInk,
-  figureInkMuted,
-  figurePaper,
-  labelFontSize,
-  okabeIto,
-  textFont,
-} from './figurePalette';
+import { figureInk, figureInkMuted, figurePaper, okabeIto, textFont } from './figurePalette';
 import type { DisplayUnit, Point2, ShearAxisConvention } from './figureTypes';
 import { markerPath, type MarkerShape } from './markerShapes';
 import {
@@ -138,7 +132,8 @@ export function MohrCircle(props: MohrCircleProps) {
           {title}
         </text>
       )}
-      <FigureAxes layout={layout.axes} captions={layout.captions} fontSize={labelFontSize} />
+      <FigureAxes layout={layout.axes} />
+      <AxisLines layout={layout.axes} />
 
       {!layout.degenerate && (
         <g data-part="circle" fill="none">
@@ -187,6 +182,7 @@ export function MohrCircle(props: MohrCircleProps) {
       </g>
 
       <FigureLabels labels={layout.labels} />
+      <FigureLabels labels={layout.captions} fontFamily={textFont} part="captions" />
 
       {onRotate && handlePoint && !layout.degenerate && rotated && (
         <RotationHandle

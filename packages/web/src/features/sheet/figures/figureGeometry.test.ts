@@ -8,6 +8,7 @@ import {
   mohrPlotY,
   mohrRotationSense,
   normalizeHalfTurn,
+  rangeWithOriginIfClose,
   rotationFromPlotPoint,
   shearAxisPositiveDirection,
   shearAxisReading,
@@ -259,5 +260,18 @@ describe('loadLineFactor', () => {
     ];
     expect(loadLineFactor([-1, 0], rightHalf)).toBeNull();
     expect(loadLineFactor([1, 0], rightHalf)).toBeCloseTo(100, 12);
+  });
+});
+
+describe('rangeWithOriginIfClose', () => {
+  it('takes in zero when that at most doubles the range', () => {
+    expect(rangeWithOriginIfClose(40, 80)).toEqual([0, 80]);
+    expect(rangeWithOriginIfClose(-80, -40)).toEqual([-80, 0]);
+    expect(rangeWithOriginIfClose(-45, 85)).toEqual([-45, 85]);
+  });
+
+  it('leaves a range far from zero alone', () => {
+    expect(rangeWithOriginIfClose(476, 504)).toEqual([476, 504]);
+    expect(rangeWithOriginIfClose(41, 80, 1.6)).toEqual([41, 80]);
   });
 });

@@ -137,6 +137,21 @@ export function clientToViewBox(
   };
 }
 
+/**
+ * A horizontal range widened to take in 0 when the result is at most `ratio` times as wide
+ * (seeing which side of zero a stress lies helps, but not at the cost of a tiny drawing).
+ *
+ * @example
+ * rangeWithOriginIfClose(40, 80);  // [0, 80]: twice as wide
+ * rangeWithOriginIfClose(476, 504); // [476, 504]: zero is far away
+ */
+export function rangeWithOriginIfClose(min: number, max: number, ratio = 2): [number, number] {
+  const width = max - min;
+  if (min > 0 && max <= ratio * width) return [0, max];
+  if (max < 0 && -min <= ratio * width) return [min, 0];
+  return [min, max];
+}
+
 // ---------------------------------------------------------------------------------------------
 // Mohr's circle of a plane state
 

@@ -11,6 +11,7 @@ import {
   mohrPlotPoint,
   mohrPlotY,
   mohrRotationSense,
+  rangeWithOriginIfClose,
   shearAxisPositiveDirection,
   type MohrPlaneGeometry,
   type ViewTransform,
@@ -128,6 +129,7 @@ export function mohrCircleLayout(input: MohrCircleInput): MohrCircleLayout {
     bottom: 24 + footerLines * footerLineHeight,
     left: 44,
   };
+  const positiveDown = shearAxisPositiveDirection(shearAxis) === 'down';
   const sideMargin = Math.min(
     Math.max(widestSideLabel + 14, 56),
     0.27 * (width - padding.left - padding.right),
@@ -137,17 +139,18 @@ export function mohrCircleLayout(input: MohrCircleInput): MohrCircleLayout {
     width,
     height,
     padding,
-    margin: { top: 30, right: sideMargin, bottom: 30, left: sideMargin },
+    // Room above and below for the τmax labels and the τ caption at the axis's positive end;
+    // the same both ways so a change of convention moves nothing.
+    margin: { top: 40, right: sideMargin, bottom: 40, left: sideMargin },
   });
 
   const axes = axesLayout(view, {
     unit,
     xCaption: `σ (${unit.label})`,
-    yCaption:
-      shearAxisPositiveDirection(shearAxis) === 'down'
-        ? `τ (${unit.label}) positive down`
-        : `τ (${unit.label}) clockwise positive, up`,
-    ySign: shearAxisPositiveDirection(shearAxis) === 'down' ? -1 : 1,
+    yCaption: positiveDown
+      ? `τ (${unit.label}) positive down`
+      : `τ (${unit.label}) clockwise positive, up`,
+    ySign: positiveDown ? -1 : 1,
     fontSize: labelFontSize,
   });
 
@@ -283,11 +286,7 @@ export function mohrCircleLayout(input: MohrCircleInput): MohrCircleLayout {
   };
 }
 
-/**
- * The world rectangle to show: the circle, widened to take in σ = 0 when that makes it at most
- * 1.6 times the circle's width (it helps to see which side of zero a state lies, but not at the
- * cost of a small circle).
- */
+/** The circle (or a small square round a point circle), taking in σ = 0 when it is close. */
 function mohrWorldBox(
   geometry: MohrPlaneGeometry,
   degenerate: boolean,
@@ -295,11 +294,7 @@ function mohrWorldBox(
 ): WorldBox {
   const { centre, radius } = geometry;
   const half = degenerate ? (centre !== 0 ? Math.abs(centre) / 2 : 1 / unit.perPa) : radius;
-  let xMin = centre - half;
-  let xMax = centre + half;
-  const maxWidth = 1.6 * 2 * half;
-  if (xMin > 0 && xMax <= maxWidth) xMin = 0;
-  if (xMax < 0 && -xMin <= maxWidth) xMax = 0;
+  const [xMin, xMax] = rangeWithOriginIfClose(centre - half, centre + half, 1.6);
   return { xMin, xMax, yMin: -half, yMax: half };
 }
 
