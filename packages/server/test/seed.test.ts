@@ -144,7 +144,9 @@ describe('seeding from example files', () => {
 
     const first = await seedDemo(dataSource, { examplesDir: dir });
     expect(first).toMatchObject({ source: 'examples', sheets: { total: 2, added: 2 } });
-    expect(first.skipped).toEqual(['broken.sheet.json: cells.0.kind: is required']);
+    expect(first.skipped).toEqual([
+      "broken.sheet.json: cells[0].kind: Invalid discriminator value. Expected 'note' | 'quantity' | 'stress' | 'rosette' | 'rotate' | 'principal' | 'criterion' | 'pointset'",
+    ]);
     const rows: { calc_number: string; title: string }[] = await dataSource.query(`SELECT calc_number, title FROM sheets ORDER BY calc_number`);
     expect(rows).toEqual([
       { calc_number: 'FPD-001', title: 'soil under pad' },

@@ -69,6 +69,20 @@ describe('projects and sheets', () => {
     expect(projects.body.projects.find((p: { id: string }) => p.id === project.id).sheetCount).toBe(2);
   });
 
+  it("checks each cell's own fields with the engine's format reader, naming them", async () => {
+    const refused = await engineer.post(`/api/projects/${team.project.id}/sheets`, {
+      title: 'Bracket stress',
+      content: { format: 'sheaf-sheet', version: 1, cells: [{ id: 'k1', kind: 'stress', name: 'S', sx: 12, sy: '0 MPa' }] },
+    });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error).toEqual({
+      code: 'invalid-field',
+      message:
+        'content.cells[0].sx: must be a string (an expression such as "120 MPa"); ' +
+        'content.cells[0].txy: must be a string (an expression such as "120 MPa")',
+    });
+  });
+
   it('gives every sheet its own calc number when many are created at once', async () => {
     const project = await createProjectIn(server.deps.dataSource, team.organizationId, 'PAR');
     const made = await Promise.all(

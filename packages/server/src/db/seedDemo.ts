@@ -2,8 +2,8 @@ import { createHash } from 'node:crypto';
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import type { DataSource, EntityManager } from 'typeorm';
-import { SheetContentV1 } from '@sheaf/engine/api';
-import { describeIssues } from '../http/validation';
+import { readSheet } from '@sheaf/engine';
+import type { SheetContentV1 } from '@sheaf/engine/api';
 import { hashPassword } from '../services/passwords';
 import { formatCalcNumber } from '../services/sheets';
 import { DEMO_ACCOUNTS, DEMO_ORGANIZATION } from './demoAccounts';
@@ -26,7 +26,7 @@ export function seedUuid(key: string): string {
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-8${hex.slice(13, 16)}-${variant}${hex.slice(17, 20)}-${hex.slice(20, 32)}`;
 }
 
-/** Example sheets (`*.sheet.json`) from the folder, each checked against the format; bad files are reported, not seeded. */
+/** Example sheets (`*.sheet.json`) from the folder, each read by the engine's format reader; bad files are reported, not seeded. */
 export function readExampleSheets(dir: string): { sheets: DemoSheet[]; skipped: string[] } {
   const skipped: string[] = [];
   if (!existsSync(dir)) return { sheets: [], skipped };
@@ -39,17 +39,14 @@ export function readExampleSheets(dir: string): { sheets: DemoSheet[]; skipped: 
       skipped.push(`${file}: not valid JSON (${error instanceof Error ? error.message : String(error)})`);
       continue;
     }
-    const parsed = SheetContentV1.safeParse(raw);
-    if (!parsed.success) {
-      skipped.push(`${file}: ${describeIssues(parsed.error.issues, raw, 'file')}`);
+    const read = readSheet(raw);
+    if (!read.ok) {
+      skipped.push(`${file}: ${read.errors.join('; ')}`);
       continue;
     }
-    const title = parsed.data.title?.trim() || basename(file, '.sheet.json').replace(/[-_]+/g, ' ');
-    sheets.push({
-      key: `examples/${file}`,
-      projectCode: projectForExample(file, title).code,
-      content: { ...parsed.data, title },
-    });
+    const content = read.sheet as unknown as SheetContentV1;
+    const title = content.title?.trim() || basename(file, '.sheet.json').replace(/[-_]+/g, ' ');
+    sheets.push({ key: `examples/${file}`, projectCode: projectForExample(file, title).code, content: { ...content, title } });
   }
   return { sheets, skipped };
 }

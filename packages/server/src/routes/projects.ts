@@ -13,6 +13,7 @@ import {
 } from '@sheaf/engine/api';
 import { organizationFromParams, projectFromParams, sheetFromParams, type AccessGrant } from '../auth/permissions';
 import { createProject, listProjects } from '../services/projects';
+import { checkSheetContent } from '../services/sheetContent';
 import { createSheet, deleteSheet, listSheets, sheetDetail, updateSheet } from '../services/sheets';
 import { created, defineRoute, noContent, ok, type Route } from './defineRoute';
 
@@ -92,7 +93,7 @@ export function projectAndSheetRoutes(): Route[] {
       id: 'sheets.create',
       method: 'post',
       path: '/api/projects/:projectId/sheets',
-      summary: "Create a sheet in a project under the project's next calc number, empty or from sheet file content",
+      summary: "Create a sheet in a project under the project's next calc number, empty or from sheet file content (checked by the engine's format reader)",
       tag: 'sheets',
       access: { kind: 'permission', action: 'sheet.create', resolve: projectFromParams },
       params: z.object({ projectId: Id }),
@@ -101,7 +102,7 @@ export function projectAndSheetRoutes(): Route[] {
       handler: async ({ deps, user, access, body }) => {
         const sheet = await createSheet(deps.dataSource, grantedProject(access), {
           title: body.title,
-          content: body.content,
+          content: body.content ? checkSheetContent(body.content) : undefined,
           createdByUserId: (user as Express.User).id,
         });
         return created({ sheet });
