@@ -9,7 +9,8 @@ import WebSocket, { WebSocketServer } from 'ws';
 import type * as Y from 'yjs';
 import { COLLAB_CLOSE, COLLAB_CLOSE_REASON, type CollabCloseCode } from './closeCodes';
 import { createCollabMetrics, type CollabLogger, type CollabMetrics } from './collabMetrics';
-import { SheetGoneError, SheetRoom, type ConnectionIdentity, type RoomOptions, type RoomPersistence } from './SheetRoom';
+import { SheetGoneError, type RoomPersistence } from './roomPersistence';
+import { SheetRoom, type ConnectionIdentity, type RoomOptions } from './SheetRoom';
 import { sheetContentFromDoc, type SheetFileContent } from './sheetDoc';
 
 export interface CollabServerOptions {

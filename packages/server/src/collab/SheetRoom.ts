@@ -4,8 +4,8 @@
  *
  * Durability rule: an update from a writer is appended to the update log in PostgreSQL before it
  * is applied to the room's document, so nothing reaches another client (or a sync step 2 answer)
- * before it is stored. A failed append is retried with backoff, forever; the update waits in
- * memory meanwhile and nothing queued behind it is relayed either.
+ * before it is stored (StoreThenApplyQueue). A failed append is retried with backoff, forever;
+ * the update waits in memory meanwhile and nothing queued behind it is relayed either.
  */
 import WebSocket from 'ws';
 import * as awarenessProtocol from 'y-protocols/awareness';
@@ -15,6 +15,8 @@ import { stampAwarenessEntries } from './awarenessUser';
 import { COLLAB_CLOSE, COLLAB_CLOSE_REASON, type CollabCloseCode } from './closeCodes';
 import { sheetMeta } from './sheetDoc';
 import type { CollabLogger, CollabMetrics } from './collabMetrics';
+import type { LoggedUpdate, RoomPersistence } from './roomPersistence';
+import { StoreThenApplyQueue } from './StoreThenApplyQueue';
 import {
   awarenessMessage,
   decodeAwarenessUpdate,
@@ -24,38 +26,6 @@ import {
   syncStep2Message,
   updateMessage,
 } from './messages';
-
-/** The sheet does not exist (any more): deleted while its room was open, say. */
-export class SheetGoneError extends Error {
-  override name = 'SheetGoneError';
-  constructor(readonly sheetId: string) {
-    super(`sheet ${sheetId} does not exist`);
-  }
-}
-
-/** What a room needs from the database. */
-export interface RoomPersistence {
-  /**
-   * The sheet's stored state with every logged update applied, how many log rows that took, and
-   * the sheet's title (`sheets.title`). Throws SheetGoneError when there is no such sheet.
-   */
-  load(sheetId: string): Promise<{ state: Uint8Array; logRows: number; title: string }>;
-  /**
-   * Append updates to the log, in order, in one statement. Resolves once they are committed;
-   * throws SheetGoneError when the sheet was deleted.
-   */
-  append(sheetId: string, updates: readonly LoggedUpdate[]): Promise<void>;
-  /**
-   * Fold the log into the stored state (reading both from the database, not from the room).
-   * Also gives the sheet's title then, or null when the sheet is gone.
-   */
-  compact(sheetId: string): Promise<{ foldedRows: number; title: string | null }>;
-}
-
-export interface LoggedUpdate {
-  update: Uint8Array;
-  userId: string | null;
-}
 
 /** Who a connection belongs to and whether it may change the document. */
 export interface ConnectionIdentity {
@@ -82,15 +52,10 @@ interface Connection {
   clientIds: Set<number>;
 }
 
-interface QueuedUpdate {
-  update: Uint8Array;
+interface QueuedUpdate extends LoggedUpdate {
   /** The connection it came from; null for an edit made by the server itself. */
   origin: Connection | null;
-  userId: string | null;
 }
-
-/** Updates stored per INSERT at most, so one statement stays small under a burst. */
-const MAX_BATCH = 200;
 /** Awareness client ids one connection may hold (a tab holds one; a reload briefly two). */
 const MAX_CLIENT_IDS_PER_CONNECTION = 4;
 
@@ -99,8 +64,7 @@ export class SheetRoom {
   readonly awareness: awarenessProtocol.Awareness;
   private readonly connections = new Map<WebSocket, Connection>();
   private readonly owners = new Map<number, Connection>();
-  private readonly queue: QueuedUpdate[] = [];
-  private draining: Promise<void> | null = null;
+  private readonly queue: StoreThenApplyQueue<QueuedUpdate>;
   private logRowsSinceCompaction: number;
   private compacting: Promise<void> | null = null;
   private compactAgain = false;
@@ -117,6 +81,7 @@ export class SheetRoom {
     this.doc = new Y.Doc();
     Y.applyUpdate(this.doc, state);
     this.logRowsSinceCompaction = logRows;
+    this.queue = new StoreThenApplyQueue<QueuedUpdate>(sheetId, options, (batch) => this.applyStored(batch), () => this.closeAsGone());
     this.awareness = new awarenessProtocol.Awareness(this.doc);
     // The server has no presence of its own.
     this.awareness.setLocalState(null);
@@ -138,7 +103,7 @@ export class SheetRoom {
 
   /** True while updates wait to be stored or a compaction runs. */
   get busy(): boolean {
-    return this.queue.length > 0 || this.draining !== null || this.compacting !== null;
+    return this.queue.pending || this.compacting !== null;
   }
 
   /**
@@ -166,7 +131,7 @@ export class SheetRoom {
 
   /** Resolves once every update received so far is stored and applied. */
   async flush(): Promise<void> {
-    while (this.draining !== null) await this.draining;
+    await this.queue.flush();
   }
 
   /**
@@ -247,36 +212,20 @@ export class SheetRoom {
     const decoded = Y.decodeUpdate(update);
     if (decoded.structs.length === 0 && decoded.ds.clients.size === 0) return;
     this.queue.push({ update, origin, userId });
-    this.startDraining();
   }
 
-  private startDraining(): void {
-    if (this.draining !== null || this.queue.length === 0) return;
-    this.draining = this.drain().finally(() => {
-      this.draining = null;
-      this.startDraining();
-    });
+  /** Stored: now the room may apply them, which relays each to every other connection. */
+  private applyStored(batch: readonly QueuedUpdate[]): void {
+    for (const { update, origin } of batch) this.apply(update, origin);
+    this.logRowsSinceCompaction += batch.length;
+    this.scheduleCompaction();
   }
 
-  private async drain(): Promise<void> {
-    while (this.queue.length > 0 && !this.gone) {
-      const batch = this.queue.splice(0, MAX_BATCH);
-      try {
-        await this.storeWithRetry(batch);
-      } catch (error) {
-        if (!(error instanceof SheetGoneError)) throw error;
-        // Deleted while open: its edits have nowhere to go. Everyone is told the sheet is gone.
-        this.gone = true;
-        this.queue.length = 0;
-        this.options.logger.warn({ sheetId: this.sheetId }, 'sheet deleted while open; closing its room');
-        this.closeConnections(COLLAB_CLOSE.notFound);
-        return;
-      }
-      // Stored: now the room may apply them, which relays each to every other connection.
-      for (const { update, origin } of batch) this.apply(update, origin);
-      this.logRowsSinceCompaction += batch.length;
-      this.scheduleCompaction();
-    }
+  /** The sheet was deleted while open: everyone is told it is gone. */
+  private closeAsGone(): void {
+    this.gone = true;
+    this.options.logger.warn({ sheetId: this.sheetId }, 'sheet deleted while open; closing its room');
+    this.closeConnections(COLLAB_CLOSE.notFound);
   }
 
   private apply(update: Uint8Array, origin: Connection | null): void {
@@ -285,27 +234,6 @@ export class SheetRoom {
     } catch (error) {
       // It decoded, so this is a Yjs-level failure; the log row is skipped the same way on load.
       this.options.logger.error({ err: error, sheetId: this.sheetId }, 'a stored update does not apply');
-    }
-  }
-
-  private async storeWithRetry(batch: readonly QueuedUpdate[]): Promise<void> {
-    const updates = batch.map(({ update, userId }) => ({ update, userId }));
-    for (let attempt = 1; ; attempt++) {
-      try {
-        await this.options.persistence.append(this.sheetId, updates);
-        this.options.metrics.updatesStored += updates.length;
-        if (attempt > 1) this.options.logger.info({ sheetId: this.sheetId, attempt }, 'stored the waiting updates');
-        return;
-      } catch (error) {
-        if (error instanceof SheetGoneError) throw error;
-        this.options.metrics.storeFailures++;
-        const delayMs = Math.min(this.options.maxStoreRetryDelayMs, 50 * 2 ** Math.min(attempt, 16));
-        this.options.logger.error(
-          { err: error, sheetId: this.sheetId, updates: updates.length, attempt, retryInMs: delayMs },
-          'could not store updates in the log; they wait in memory and nothing after them is relayed',
-        );
-        await new Promise((resolve) => setTimeout(resolve, delayMs));
-      }
     }
   }
 

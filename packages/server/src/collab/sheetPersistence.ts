@@ -6,7 +6,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import * as Y from 'yjs';
 import type { CollabLogger } from './collabMetrics';
-import { SheetGoneError, type LoggedUpdate, type RoomPersistence } from './SheetRoom';
+import { SheetGoneError, type LoggedUpdate, type RoomPersistence } from './roomPersistence';
 import { docFromSheetContent, sheetContentFromDoc, type SheetFileContent } from './sheetDoc';
 
 /** PostgreSQL's code for a foreign-key violation: the log row's sheet is gone. */
