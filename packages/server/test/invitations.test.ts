@@ -34,6 +34,11 @@ describe('invitation round trip through the API and the fake SMTP', () => {
     const link = linkIn(mail, '/invite/');
     expect(link.startsWith(`${server.url}/invite/`)).toBe(true);
     const token = decodeURIComponent(link.slice(`${server.url}/invite/`.length));
+    // The dev inbox page shows it too, with the link clickable.
+    const inboxPage = await owner.get('/dev/mail');
+    expect(inboxPage.headers.get('content-type')).toContain('text/html');
+    expect(inboxPage.text).toContain(`to ${email}`);
+    expect(inboxPage.text).toContain(`<a href="${link}">`);
 
     // The invitation page works before anyone signs in.
     const newcomer = server.client();

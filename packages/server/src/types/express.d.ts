@@ -1,5 +1,3 @@
-import 'express-session';
-
 declare global {
   namespace Express {
     /** The signed-in user as passport puts it on `req.user`. */
@@ -8,13 +6,6 @@ declare global {
       email: string;
       name: string;
     }
-  }
-}
-
-declare module 'express-session' {
-  interface SessionData {
-    /** Where to send the browser after a provider sign-in (a path on this site). */
-    returnTo?: string;
   }
 }
 

@@ -8,7 +8,7 @@ import { User } from '../../src/entities/User';
 import { hashPassword } from '../../src/services/passwords';
 import { insertOrganization } from '../../src/services/organizations';
 import { createSheet } from '../../src/services/sheets';
-import { hashToken, newToken } from '../../src/services/tokens';
+import { newToken } from '../../src/services/tokens';
 import { Invitation } from '../../src/entities/Invitation';
 import type { TestClient } from './TestClient';
 import type { TestServer } from './testServer';
@@ -101,8 +101,6 @@ export async function createInvitation(
   });
   return token;
 }
-
-export { hashToken };
 
 /** A client signed in as the user. */
 export async function signedInClient(server: TestServer, user: TestUser): Promise<TestClient> {
