@@ -17,6 +17,8 @@ import { startTestServer, type TestServer } from './helpers/testServer';
 const run = promisify(execFile);
 const packageDir = resolve(import.meta.dirname, '..');
 const tsx = resolve(packageDir, '../../node_modules/.bin/tsx');
+// Each entry point is a fresh tsx process: seconds each, more on a busy machine.
+const ENTRY_POINT_TIMEOUT_MS = 180_000;
 const TABLES = ['users', 'identities', 'organizations', 'memberships', 'invitations', 'password_resets', 'projects', 'sheets', 'audit_events'];
 
 /** A database of its own, so counting every table is not disturbed by other test files. */
@@ -62,7 +64,7 @@ describe('the migrate and seed entry points', () => {
     const migrated = await run(tsx, ['src/db/migrate.ts'], { cwd: packageDir, env });
     expect(migrated.stdout).toContain('Initial1796140000000');
     firstOutput = (await run(tsx, ['src/db/seed.ts'], { cwd: packageDir, env })).stdout;
-  });
+  }, ENTRY_POINT_TIMEOUT_MS);
   afterAll(async () => {
     await db?.drop();
   });
@@ -77,7 +79,7 @@ describe('the migrate and seed entry points', () => {
     const second = await run(tsx, ['src/db/seed.ts'], { cwd: packageDir, env });
     expect(second.stdout).toContain('already seeded, nothing added');
     expect(await counts(db.url)).toEqual(before);
-  });
+  }, ENTRY_POINT_TIMEOUT_MS);
 
   it('prints counts, never a password or a hash', () => {
     expect(firstOutput).toMatch(/^demo organization "Northgate Lifting Ltd\.": 4 members, 6 projects, \d+ sheets \(added 4 users, 6 projects/);
