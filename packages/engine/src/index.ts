@@ -57,7 +57,7 @@ export type { Dimension, DimensionName } from './units/dimension';
 export type { Measure } from './units/measure';
 export { checkDimension } from './units/checkDimension';
 export type { ExpectedDimension } from './units/checkDimension';
-export { compileExpression, evaluateExpression, isExpressionProblem } from './units/expression';
+export { compileExpression, evaluateExpression, isExpressionProblem, isFreeStandingSymbol } from './units/expression';
 export type { CompiledExpression, ExpressionProblem, Quantity } from './units/expression';
 
 // Stress math

@@ -115,7 +115,13 @@ export function compileExpression(text: string): CompiledExpression {
   return compiled;
 }
 
-/** Symbols of an expression that are neither units nor allowed constants when no cell has their name. */
+/**
+ * True when a symbol of an expression stands on its own without a cell of that name: a unit
+ * mathjs knows (with or without prefix) or an allowed constant (`pi`, `e`, `Infinity`). Editors
+ * use it to mark the other symbols as unknown names, as the sheet's graph does.
+ * @example isFreeStandingSymbol('MPa') // true; isFreeStandingSymbol('phi') // false
+ * @public
+ */
 export function isFreeStandingSymbol(name: string): boolean {
   return isUnitName(name) || ALLOWED_CONSTANTS.has(name);
 }
