@@ -59,7 +59,7 @@ try {
 }
 
 const demo = JSON.parse(
-  run(TSX, ['-e', "import('./src/db/demoAccounts.ts').then(m => console.log(JSON.stringify(m.demoSignIn())))"], {
+  run(TSX, ['-e', "import('./src/db/demoAccounts.ts').then(m => console.log(JSON.stringify({ password: m.DEMO_PASSWORD, organization: m.DEMO_ORGANIZATION.name, accounts: m.DEMO_ACCOUNTS })))"], {
     cwd: SERVER_DIR,
     env,
     quiet: true,
@@ -75,7 +75,7 @@ waitForHealth().then((ok) => {
   const lines = [
     '',
     `  Sheaf is running at http://localhost:${port}`,
-    `  Demo sign-in (password ${demo.password}):`,
+    `  Demo organization ${demo.organization}; sign in with password ${demo.password} as:`,
     ...demo.accounts.map((a) => `    ${a.role.padEnd(9)} ${a.email}`),
     '  Press Ctrl-C to stop the server and the database.',
     '',

@@ -139,15 +139,15 @@ describe('seeding from example files', () => {
   it('files each valid example under the project its name points to, reports bad files, and stays idempotent', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'sheaf-examples-'));
     const pulley = { ...BUILT_IN_DEMO_SHEETS[4]?.content, title: 'Hub bore, worst load' };
-    writeFileSync(join(dir, 'pulley-hub.sheet.json'), JSON.stringify(pulley));
-    writeFileSync(join(dir, 'soil-under-pad.sheet.json'), JSON.stringify({ ...BUILT_IN_DEMO_SHEETS[5]?.content, title: undefined }));
-    writeFileSync(join(dir, 'broken.sheet.json'), JSON.stringify({ format: 'sheaf-sheet', version: 1, cells: [{ id: 'a' }] }));
+    writeFileSync(join(dir, 'pulley-hub.sheaf.json'), JSON.stringify(pulley));
+    writeFileSync(join(dir, 'soil-under-pad.sheaf.json'), JSON.stringify({ ...BUILT_IN_DEMO_SHEETS[5]?.content, title: undefined }));
+    writeFileSync(join(dir, 'broken.sheaf.json'), JSON.stringify({ format: 'sheaf-sheet', version: 1, cells: [{ id: 'a' }] }));
     writeFileSync(join(dir, 'notes.txt'), 'not a sheet');
 
     const first = await seedDemo(dataSource, { examplesDir: dir });
     expect(first).toMatchObject({ source: 'examples', sheets: { total: 2, added: 2 } });
     expect(first.skipped).toEqual([
-      "broken.sheet.json: cells[0].kind: Invalid discriminator value. Expected 'note' | 'quantity' | 'stress' | 'rosette' | 'rotate' | 'principal' | 'criterion' | 'pointset'",
+      "broken.sheaf.json: cells[0].kind: Invalid discriminator value. Expected 'note' | 'quantity' | 'stress' | 'rosette' | 'rotate' | 'principal' | 'criterion' | 'pointset'",
     ]);
     const rows: { calc_number: string; title: string }[] = await dataSource.query(`SELECT calc_number, title FROM sheets ORDER BY calc_number`);
     expect(rows).toEqual([

@@ -21,9 +21,9 @@ describe('built-in demo sheets', () => {
   });
 
   it('files example files under the project their names point to', () => {
-    expect(projectForExample('lifting-lug-weld.sheet.json', '').code).toBe('GBL');
-    expect(projectForExample('x.sheet.json', 'Accumulator shell at the nozzle').code).toBe('HAS');
-    expect(projectForExample('rosette-r2.sheet.json', '').code).toBe('BLT');
-    expect(projectForExample('unrelated.sheet.json', 'Something else').code).toBe('GBL');
+    expect(projectForExample('lifting-lug-weld.sheaf.json', '').code).toBe('GBL');
+    expect(projectForExample('x.sheaf.json', 'Accumulator shell at the nozzle').code).toBe('HAS');
+    expect(projectForExample('rosette-r2.sheaf.json', '').code).toBe('BLT');
+    expect(projectForExample('unrelated.sheaf.json', 'Something else').code).toBe('GBL');
   });
 });

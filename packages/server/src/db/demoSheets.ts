@@ -132,6 +132,7 @@ export const BUILT_IN_DEMO_SHEETS: readonly DemoSheet[] = [
 
 /** The demo project an example file belongs to, by words in its file name and title. */
 export function projectForExample(fileName: string, title: string): DemoProject {
-  const words = `${fileName} ${title}`.toLowerCase();
-  return DEMO_PROJECTS.find((p) => p.keywords.some((k) => words.includes(k))) ?? (DEMO_PROJECTS[0] as DemoProject);
+  // The file name is the more deliberate label, so it decides before the title does.
+  const byName = (text: string) => DEMO_PROJECTS.find((p) => p.keywords.some((k) => text.toLowerCase().includes(k)));
+  return byName(fileName) ?? byName(title) ?? (DEMO_PROJECTS[0] as DemoProject);
 }

@@ -9,7 +9,7 @@ import { seedDemo } from './seedDemo';
 /**
  * `tsx packages/server/src/db/seed.ts`: writes the demo organization into DATABASE_URL once
  * (running it again changes nothing). Sheets come from the top-level examples/ folder when it
- * holds `*.sheet.json` files. Prints counts only, never credentials or hashes.
+ * holds `*.sheaf.json` files. Prints counts only, never credentials or hashes.
  */
 const examplesDir = resolve(fileURLToPath(new URL('.', import.meta.url)), '../../../../examples');
 

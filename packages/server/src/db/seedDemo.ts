@@ -26,12 +26,12 @@ export function seedUuid(key: string): string {
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-8${hex.slice(13, 16)}-${variant}${hex.slice(17, 20)}-${hex.slice(20, 32)}`;
 }
 
-/** Example sheets (`*.sheet.json`) from the folder, each read by the engine's format reader; bad files are reported, not seeded. */
+/** Example sheets (`*.sheaf.json`) from the folder, each read by the engine's format reader; bad files are reported, not seeded. */
 export function readExampleSheets(dir: string): { sheets: DemoSheet[]; skipped: string[] } {
   const skipped: string[] = [];
   if (!existsSync(dir)) return { sheets: [], skipped };
   const sheets: DemoSheet[] = [];
-  for (const file of readdirSync(dir).filter((f) => f.endsWith('.sheet.json')).sort()) {
+  for (const file of readdirSync(dir).filter((f) => f.endsWith('.sheaf.json')).sort()) {
     let raw: unknown;
     try {
       raw = JSON.parse(readFileSync(join(dir, file), 'utf8'));
@@ -45,7 +45,7 @@ export function readExampleSheets(dir: string): { sheets: DemoSheet[]; skipped: 
       continue;
     }
     const content = read.sheet as unknown as SheetContentV1;
-    const title = content.title?.trim() || basename(file, '.sheet.json').replace(/[-_]+/g, ' ');
+    const title = content.title?.trim() || basename(file, '.sheaf.json').replace(/[-_]+/g, ' ');
     sheets.push({ key: `examples/${file}`, projectCode: projectForExample(file, title).code, content: { ...content, title } });
   }
   return { sheets, skipped };
