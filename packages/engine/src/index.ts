@@ -118,5 +118,23 @@ export type { ColumnMapping, PointSetOutcome, RowProblem } from './batch/pointSe
 export { parseStressCsv } from './batch/csv';
 export type { CsvColumns } from './batch/csv';
 
+// Revision diff (shared by the server's diff route and the web app's revisions page)
+export { diffRevisions } from './diff/diffRevisions';
+export { diffCells, inputChanges } from './diff/diffCells';
+export type { CellDiff } from './diff/diffCells';
+export { diffResults } from './diff/diffResults';
+export type { DiffResultsOptions } from './diff/diffResults';
+export type {
+  ChangedCell,
+  DiffCellRef,
+  DiffValue,
+  InputChange,
+  ResultChange,
+  RevisionDiff,
+  RevisionSnapshot,
+  Verdict,
+  VerdictCrossing,
+} from './diff/types';
+
 // HTTP API shapes shared by server and web (also importable as '@sheaf/engine/api')
 export * as api from './api/index';

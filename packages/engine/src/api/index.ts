@@ -8,4 +8,7 @@ export * from './organizations';
 export * from './projects';
 export * from './sheets';
 export * from './system';
+export * from './review';
+export * from './notes';
+export * from './revisions';
 export * from './permissions';

@@ -11,7 +11,7 @@ describe('permission table', () => {
 
   it('lets the owner do everything and the viewer only read', () => {
     expect(ACTIONS.filter((action) => !can('owner', action))).toEqual([]);
-    expect(ACTIONS.filter((action) => can('viewer', action))).toEqual(['org.read', 'project.read', 'sheet.read']);
+    expect(ACTIONS.filter((action) => can('viewer', action))).toEqual(['org.read', 'project.read', 'sheet.read', 'revision.read']);
   });
 
   it('lets engineers edit sheets but not checkers or viewers', () => {
@@ -21,5 +21,15 @@ describe('permission table', () => {
   it('keeps approval with checkers and owners, and member management with owners', () => {
     expect(ROLES.filter((role) => can(role, 'sheet.approve'))).toEqual(['owner', 'checker']);
     expect(ROLES.filter((role) => can(role, 'org.manageMembers'))).toEqual(['owner']);
+  });
+
+  it('keeps the check workflow apart: engineers submit, checkers return and resolve, owners reassign', () => {
+    expect(ROLES.filter((role) => can(role, 'sheet.submit'))).toEqual(['owner', 'engineer']);
+    expect(ROLES.filter((role) => can(role, 'sheet.check'))).toEqual(['owner', 'checker']);
+    expect(ROLES.filter((role) => can(role, 'sheet.return'))).toEqual(['owner', 'checker']);
+    expect(ROLES.filter((role) => can(role, 'note.create'))).toEqual(['owner', 'engineer', 'checker']);
+    expect(ROLES.filter((role) => can(role, 'note.resolve'))).toEqual(['owner', 'checker']);
+    expect(ROLES.filter((role) => can(role, 'sheet.reassignChecker'))).toEqual(['owner']);
+    expect(ROLES.filter((role) => can(role, 'revision.read'))).toEqual(['owner', 'engineer', 'checker', 'viewer']);
   });
 });

@@ -5,10 +5,13 @@ import type { Role } from './common';
  * The server decides every API route and every websocket connection with it; the web app uses
  * the same table only to hide controls a member cannot use (the server still decides).
  *
- * - owner: everything, including members and settings
- * - engineer: create and edit projects and sheets, submit them for check
- * - checker: read, write notes, return or approve (never their own sheet: checked per sheet)
- * - viewer: read
+ * - owner: everything, including members and settings, and reassigning a sheet's checker
+ * - engineer: create and edit projects and sheets, submit them for check, write and answer notes
+ * - checker: read, write and resolve notes, return or approve (never their own sheet: checked per
+ *   sheet, as is "only the checker the sheet was submitted to")
+ * - viewer: read, revisions included
+ *
+ * `sheet.check` is what makes a member eligible to be named as a sheet's checker.
  */
 export const ACTIONS = [
   'org.read',
@@ -20,18 +23,22 @@ export const ACTIONS = [
   'sheet.edit',
   'sheet.delete',
   'sheet.submit',
-  'sheet.note',
   'sheet.check',
+  'sheet.return',
   'sheet.approve',
+  'sheet.reassignChecker',
+  'note.create',
+  'note.resolve',
+  'revision.read',
 ] as const;
 export type Action = (typeof ACTIONS)[number];
 
-const READ: readonly Action[] = ['org.read', 'project.read', 'sheet.read'];
+const READ: readonly Action[] = ['org.read', 'project.read', 'sheet.read', 'revision.read'];
 
 export const PERMISSIONS: Readonly<Record<Role, readonly Action[]>> = {
   owner: ACTIONS,
-  engineer: [...READ, 'project.create', 'sheet.create', 'sheet.edit', 'sheet.delete', 'sheet.submit', 'sheet.note'],
-  checker: [...READ, 'sheet.note', 'sheet.check', 'sheet.approve'],
+  engineer: [...READ, 'project.create', 'sheet.create', 'sheet.edit', 'sheet.delete', 'sheet.submit', 'note.create'],
+  checker: [...READ, 'note.create', 'note.resolve', 'sheet.check', 'sheet.return', 'sheet.approve'],
   viewer: READ,
 };
 
