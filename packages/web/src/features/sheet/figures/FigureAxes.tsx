@@ -1,5 +1,14 @@
 import type { AxesLayout } from './axesLayout';
-import { figureFrame, figureGrid, figureInkMuted, numberFont, tickFontSize } from './figurePalette';
+import {
+  figureFrame,
+  figureGrid,
+  figureInk,
+  figureInkMuted,
+  labelFontSize,
+  numberFont,
+  textFont,
+  tickFontSize,
+} from './figurePalette';
 
 export interface FigureAxesProps {
   layout: AxesLayout;
@@ -65,6 +74,17 @@ export function FigureAxes({ layout }: FigureAxesProps) {
           </text>
         ))}
       </g>
+      <text
+        data-part="x-caption"
+        x={layout.xCaption.x}
+        y={layout.xCaption.y}
+        textAnchor="end"
+        fontFamily={textFont}
+        fontSize={labelFontSize}
+        fill={figureInk}
+      >
+        {layout.xCaption.text}
+      </text>
     </g>
   );
 }

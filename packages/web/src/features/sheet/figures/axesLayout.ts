@@ -1,19 +1,20 @@
 /**
  * Layout of a figure's axes: a light frame round the plot box with tick labels outside it, a
- * faint grid, and the two axes drawn through the origin with arrowheads and captions (placed
- * by the figure together with its point labels). Both axes
+ * faint grid, and the two axes drawn through the origin with arrowheads and captions (the
+ * vertical one placed by the figure together with its point labels). Both axes
  * use the same tick step, as befits an equal-aspect plot.
  */
 
 import type { ViewTransform } from './figureGeometry';
 import type { DisplayUnit } from './figureTypes';
+import { tickFontSize } from './figurePalette';
 import { formatNumber } from './formatQuantity';
 import { niceStep, stepDecimals, ticksForStep } from './niceTicks';
 import { estimateTextWidth, labelHeight, type LabelRequest } from './placeLabels';
 
 export interface AxesOptions {
   unit: DisplayUnit;
-  /** Caption at the positive end of the horizontal axis, e.g. "σ (MPa)". */
+  /** Caption of the horizontal axis, e.g. "σ (MPa)". */
   xCaption: string;
   /** Caption at the positive end of the vertical axis. */
   yCaption: string;
@@ -45,10 +46,11 @@ export interface AxesLayout {
   yAxisAt: number | null;
   /** Which end of the vertical axis is positive. */
   yPositive: 'up' | 'down';
+  /** The horizontal caption, right-aligned at the end of the row of tick labels. */
+  xCaption: { text: string; x: number; y: number };
   /**
-   * The two axis captions as label requests (ids `x-caption`, `y-caption`), to be placed after
-   * the figure's own labels so they give way to them: the horizontal one above or below its
-   * axis's right end, the vertical one beside its axis's positive end.
+   * The vertical caption as a label request (id `y-caption`) beside the axis's positive end, to
+   * be placed after the figure's own labels so it gives way to them.
    */
   captionRequests: LabelRequest[];
   /** The axis lines, for the label placer. */
@@ -75,9 +77,20 @@ export function axesLayout(view: ViewTransform, options: AxesOptions): AxesLayou
   const tickLabel = (value: number) =>
     formatNumber(value, { reference: 1 / 10 ** decimals, significant: 1 });
 
-  const xTicks = ticksForStep(visible.xMin * unit.perPa, visible.xMax * unit.perPa, step).map(
-    (value) => ({ value, label: tickLabel(value), at: view.toScreen(value / unit.perPa, 0).x }),
-  );
+  // The horizontal caption closes the row of tick labels under the frame, at its right end;
+  // tick labels it would cover are left out.
+  const xCaptionWidth = estimateTextWidth(options.xCaption, fontSize) * 0.9;
+  const xCaption = { text: options.xCaption, x: plot.x1, y: plot.y1 + 6 + tickFontSize };
+  const xTicks = ticksForStep(visible.xMin * unit.perPa, visible.xMax * unit.perPa, step)
+    .map((value) => ({
+      value,
+      label: tickLabel(value),
+      at: view.toScreen(value / unit.perPa, 0).x,
+    }))
+    .filter(
+      (tick) =>
+        tick.at + estimateTextWidth(tick.label, tickFontSize) / 2 + 8 < plot.x1 - xCaptionWidth,
+    );
   const readingLow = ySign * visible.yMin * unit.perPa;
   const readingHigh = ySign * visible.yMax * unit.perPa;
   const yTicks = ticksForStep(readingLow, readingHigh, step).map((value) => ({
@@ -93,19 +106,8 @@ export function axesLayout(view: ViewTransform, options: AxesOptions): AxesLayou
   const yPositive = ySign > 0 ? 'up' : 'down';
 
   const height = labelHeight(fontSize);
-  const xLine = xAxisAt ?? plot.y1;
-  const xCaptionWidth = estimateTextWidth(options.xCaption, fontSize);
   const yLine = yAxisAt ?? plot.x0;
   const captionRequests: LabelRequest[] = [
-    {
-      id: 'x-caption',
-      text: options.xCaption,
-      x: plot.x1 - 8 - xCaptionWidth / 2,
-      y: xLine,
-      directions: xAxisAt === null ? [-Math.PI / 2] : [-Math.PI / 2, Math.PI / 2],
-      gap: 4,
-      fontSize,
-    },
     {
       id: 'y-caption',
       text: options.yCaption,
@@ -130,6 +132,7 @@ export function axesLayout(view: ViewTransform, options: AxesOptions): AxesLayou
     xAxisAt,
     yAxisAt,
     yPositive,
+    xCaption,
     captionRequests,
     obstacleSegments,
   };

@@ -71,6 +71,24 @@ describe('placeLabels', () => {
     expect(box.x0).not.toBeCloseTo(107, 6);
   });
 
+  it('counts a many-sided outline as one line, not one per side', () => {
+    // A fine polygon just right of the point and one plain line just left of it: crossing the
+    // polygon once must not cost more than crossing the line.
+    const polygon = Array.from({ length: 60 }, (_, i) => {
+      const t = (2 * Math.PI * i) / 60;
+      return { x: 160 + 40 * Math.cos(t), y: 100 + 40 * Math.sin(t) };
+    });
+    const [label] = placeLabels(
+      [{ id: 'a', text: 'n = 2.50', x: 100, y: 100, directions: [0, Math.PI], fontSize }],
+      {
+        outlines: [polygon],
+        segments: [{ x1: 75, y1: 0, x2: 75, y2: 200 }],
+      },
+    );
+    // Both sides cost one crossing; the first direction (right) wins.
+    expect(label && label.x).toBeGreaterThan(100);
+  });
+
   it('stays inside the bounds', () => {
     const bounds = { x0: 0, y0: 0, x1: 300, y1: 200 };
     const [label] = placeLabels(

@@ -20,6 +20,11 @@ export interface LabelRequest {
   y: number;
   /** Directions to try, in order of preference; screen radians (0 right, π/2 down). */
   directions: number[];
+  /**
+   * Other places the label may go, tried after the first (for captions that may sit at either
+   * end of an axis). A label placed there costs a little more.
+   */
+  alternatives?: Array<{ x: number; y: number; directions: number[] }>;
   /** Distance from the point to the label's nearest edge; default 7. */
   gap?: number;
   fontSize: number;
@@ -45,6 +50,8 @@ export interface LabelObstacles {
   discs?: Array<{ cx: number; cy: number; r: number }>;
   /** Lines a label should not cross (axes, diameters); a light penalty. */
   segments?: Array<{ x1: number; y1: number; x2: number; y2: number }>;
+  /** Closed outlines (envelopes): crossing one costs the same as crossing one line. */
+  outlines?: Array<Array<{ x: number; y: number }>>;
   /** Boxes already taken (captions, legends). */
   boxes?: LabelBox[];
   /** The area labels must stay inside. */
@@ -90,6 +97,9 @@ const penalty = {
   candidateOrder: 1,
   fartherGap: 6,
   shift: 4,
+  alternativeAnchor: 30,
+  /** Per screen unit beyond the requested gap. */
+  drift: 2,
 };
 
 /**
@@ -110,22 +120,29 @@ export function placeLabels(
       box: boxInDirection(request.x, request.y, width, height, request.directions[0] ?? 0, baseGap),
       score: Number.POSITIVE_INFINITY,
     };
-    for (const [order, direction] of request.directions.entries()) {
-      for (const [gapIndex, gap] of [baseGap, baseGap + 10].entries()) {
-        // Besides the plain spot, try sliding the label sideways by one or two of its heights
-        // (across the direction), which lets a label sit beside a neighbour's instead of on it.
-        for (const [shiftIndex, shift] of [0, 1, -1, 2, -2].entries()) {
-          const box = shiftBox(
-            boxInDirection(request.x, request.y, width, height, direction, gap),
-            direction,
-            shift * height,
-          );
-          const score =
-            order * penalty.candidateOrder +
-            gapIndex * penalty.fartherGap +
-            shiftIndex * penalty.shift +
-            collisionScore(box, taken, obstacles, request);
-          if (score < chosen.score) chosen = { box, score };
+    const anchors = [
+      { x: request.x, y: request.y, directions: request.directions },
+      ...(request.alternatives ?? []),
+    ];
+    for (const [anchorIndex, anchor] of anchors.entries()) {
+      for (const [order, direction] of anchor.directions.entries()) {
+        for (const [gapIndex, gap] of [baseGap, baseGap + 10].entries()) {
+          // Besides the plain spot, try sliding the label sideways by one or two of its heights
+          // (across the direction), which lets a label sit beside a neighbour's instead of on it.
+          for (const [shiftIndex, shift] of [0, 1, -1, 2, -2].entries()) {
+            const box = shiftBox(
+              boxInDirection(anchor.x, anchor.y, width, height, direction, gap),
+              direction,
+              shift * height,
+            );
+            const score =
+              anchorIndex * penalty.alternativeAnchor +
+              order * penalty.candidateOrder +
+              gapIndex * penalty.fartherGap +
+              shiftIndex * penalty.shift +
+              collisionScore(box, taken, obstacles, { ...request, x: anchor.x, y: anchor.y });
+            if (score < chosen.score) chosen = { box, score };
+          }
         }
       }
     }
@@ -183,9 +200,11 @@ function collisionScore(
 ): number {
   let score = 0;
   // Labels keep a few units apart so two of them never read as one.
-  const spaced = { x0: box.x0 - 4, y0: box.y0 - 1, x1: box.x1 + 4, y1: box.y1 + 1 };
+  const spaced = { x0: box.x0 - 8, y0: box.y0 - 1, x1: box.x1 + 8, y1: box.y1 + 1 };
   for (const other of taken) if (boxesOverlap(spaced, other)) score += penalty.label;
   const ownDistance = boxDistance(box, request.x, request.y);
+  // A label drifts from its point only to avoid something worse.
+  score += Math.max(0, ownDistance - (request.gap ?? 7)) * penalty.drift;
   const centreX = (box.x0 + box.x1) / 2;
   const centreY = (box.y0 + box.y1) / 2;
   const ownCentreDistance = Math.hypot(centreX - request.x, centreY - request.y);
@@ -206,6 +225,13 @@ function collisionScore(
   for (const ring of obstacles.rings ?? []) if (boxCrossesRing(box, ring)) score += penalty.ring;
   for (const segment of obstacles.segments ?? []) {
     if (segmentCrossesBox(segment, box)) score += penalty.segment;
+  }
+  for (const outline of obstacles.outlines ?? []) {
+    const crosses = outline.some((p, i) => {
+      const q = outline[(i + 1) % outline.length] ?? p;
+      return segmentCrossesBox({ x1: p.x, y1: p.y, x2: q.x, y2: q.y }, box);
+    });
+    if (crosses) score += penalty.segment;
   }
   const bounds = obstacles.bounds;
   if (
