@@ -136,5 +136,28 @@ export type {
   VerdictCrossing,
 } from './diff/types';
 
+// Materials library and template parameters
+export {
+  MATERIAL_BASES,
+  MATERIAL_CATEGORIES,
+  MATERIAL_PROPERTIES,
+  MATERIAL_PROPERTY_KEYS,
+  checkMaterialValues,
+  materialKeySchema,
+  materialRecordSchema,
+  materialValueSchema,
+  materialsLookupOf,
+  toEngineMaterial,
+} from './library/materialRecord';
+export type { MaterialBasis, MaterialCategory, MaterialProblem, MaterialPropertyKey, MaterialRecord, MaterialValue } from './library/materialRecord';
+export {
+  applyTemplateParameters,
+  checkTemplateParameters,
+  defaultParameterValues,
+  templateParameterSchema,
+  templateParametersSchema,
+} from './library/templateParameters';
+export type { ParameterOutcome, ParameterProblem, ParameterValues, ParameterisedSheet, TemplateParameter } from './library/templateParameters';
+
 // HTTP API shapes shared by server and web (also importable as '@sheaf/engine/api')
 export * as api from './api/index';

@@ -55,9 +55,21 @@ export const ERROR_CODES = [
 export const ErrorCode = z.enum(ERROR_CODES);
 export type ErrorCode = z.infer<typeof ErrorCode>;
 
-/** Body of every error response: `{ error: { code, message } }`; the message names the field at fault. */
+/**
+ * One problem of a request that has several, e.g. a bad row of an uploaded CSV file: the row
+ * (1-based, counting the header as row 1) and the column where there is one, and the message.
+ */
+export const ErrorDetail = z
+  .object({ field: z.string(), row: z.number().int().optional(), column: z.string().optional(), message: z.string() })
+  .meta({ id: 'ErrorDetail' });
+export type ErrorDetail = z.infer<typeof ErrorDetail>;
+
+/**
+ * Body of every error response: `{ error: { code, message } }`; the message names the field at
+ * fault. `details` lists each problem when a request has several (rows of an uploaded file).
+ */
 export const ErrorBody = z
-  .object({ error: z.object({ code: ErrorCode, message: z.string() }) })
+  .object({ error: z.object({ code: ErrorCode, message: z.string(), details: z.array(ErrorDetail).optional() }) })
   .meta({ id: 'Error' });
 export type ErrorBody = z.infer<typeof ErrorBody>;
 

@@ -11,4 +11,6 @@ export * from './system';
 export * from './review';
 export * from './notes';
 export * from './revisions';
+export * from './materials';
+export * from './templates';
 export * from './permissions';

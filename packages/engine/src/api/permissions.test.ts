@@ -11,7 +11,7 @@ describe('permission table', () => {
 
   it('lets the owner do everything and the viewer only read', () => {
     expect(ACTIONS.filter((action) => !can('owner', action))).toEqual([]);
-    expect(ACTIONS.filter((action) => can('viewer', action))).toEqual(['org.read', 'project.read', 'sheet.read', 'revision.read']);
+    expect(ACTIONS.filter((action) => can('viewer', action))).toEqual(['org.read', 'project.read', 'sheet.read', 'revision.read', 'template.read', 'material.read']);
   });
 
   it('lets engineers edit sheets but not checkers or viewers', () => {
@@ -31,5 +31,12 @@ describe('permission table', () => {
     expect(ROLES.filter((role) => can(role, 'note.resolve'))).toEqual(['owner', 'checker']);
     expect(ROLES.filter((role) => can(role, 'sheet.reassignChecker'))).toEqual(['owner']);
     expect(ROLES.filter((role) => can(role, 'revision.read'))).toEqual(['owner', 'engineer', 'checker', 'viewer']);
+  });
+
+  it('lets every member read templates and materials, and only owners and engineers write them', () => {
+    expect(ROLES.filter((role) => can(role, 'template.read'))).toEqual(['owner', 'engineer', 'checker', 'viewer']);
+    expect(ROLES.filter((role) => can(role, 'material.read'))).toEqual(['owner', 'engineer', 'checker', 'viewer']);
+    expect(ROLES.filter((role) => can(role, 'template.write'))).toEqual(['owner', 'engineer']);
+    expect(ROLES.filter((role) => can(role, 'material.write'))).toEqual(['owner', 'engineer']);
   });
 });

@@ -11,6 +11,10 @@ import type { Role } from './common';
  *   sheet, as is "only the checker the sheet was submitted to")
  * - viewer: read, revisions included
  *
+ * Every member reads templates and the materials library (`template.read`, `material.read`);
+ * owners and engineers save templates and add or edit the organization's materials
+ * (`template.write`, `material.write`).
+ *
  * `sheet.check` is what makes a member eligible to be named as a sheet's checker.
  */
 export const ACTIONS = [
@@ -30,14 +34,18 @@ export const ACTIONS = [
   'note.create',
   'note.resolve',
   'revision.read',
+  'template.read',
+  'template.write',
+  'material.read',
+  'material.write',
 ] as const;
 export type Action = (typeof ACTIONS)[number];
 
-const READ: readonly Action[] = ['org.read', 'project.read', 'sheet.read', 'revision.read'];
+const READ: readonly Action[] = ['org.read', 'project.read', 'sheet.read', 'revision.read', 'template.read', 'material.read'];
 
 export const PERMISSIONS: Readonly<Record<Role, readonly Action[]>> = {
   owner: ACTIONS,
-  engineer: [...READ, 'project.create', 'sheet.create', 'sheet.edit', 'sheet.delete', 'sheet.submit', 'note.create'],
+  engineer: [...READ, 'project.create', 'sheet.create', 'sheet.edit', 'sheet.delete', 'sheet.submit', 'note.create', 'template.write', 'material.write'],
   checker: [...READ, 'note.create', 'note.resolve', 'sheet.check', 'sheet.return', 'sheet.approve'],
   viewer: READ,
 };
