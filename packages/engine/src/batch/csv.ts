@@ -2,7 +2,13 @@ import type { StressColumns } from './columns';
 
 /** A CSV read into stress columns, or where it went wrong (1-based line, column name). @public */
 export type CsvColumns =
-  | { readonly ok: true; readonly columns: StressColumns; readonly rows: number }
+  | {
+      readonly ok: true;
+      readonly columns: StressColumns;
+      readonly rows: number;
+      /** The 1-based line of the file each data row came from. */
+      readonly lines: Uint32Array;
+    }
   | { readonly ok: false; readonly message: string };
 
 const REQUIRED = ['sx', 'sy', 'txy'] as const;
@@ -39,6 +45,7 @@ export function parseStressCsv(text: string, siPerUnit: number): CsvColumns {
   const capacity = lines.length - headerLine - 1;
   const cols: Record<string, Float64Array> = {};
   for (const k of keys) cols[k] = new Float64Array(capacity);
+  const lineOf = new Uint32Array(capacity);
   let n = 0;
   for (let i = headerLine + 1; i < lines.length; i++) {
     const line = lines[i]!;
@@ -52,9 +59,10 @@ export function parseStressCsv(text: string, siPerUnit: number): CsvColumns {
       }
       cols[k]![n] = v * siPerUnit;
     }
+    lineOf[n] = i + 1;
     n++;
   }
   const trimmed: Record<string, Float64Array> = {};
   for (const k of keys) trimmed[k] = cols[k]!.subarray(0, n);
-  return { ok: true, columns: trimmed as unknown as StressColumns, rows: n };
+  return { ok: true, columns: trimmed as unknown as StressColumns, rows: n, lines: lineOf.subarray(0, n) };
 }
