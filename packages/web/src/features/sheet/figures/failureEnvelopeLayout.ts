@@ -252,7 +252,13 @@ export function failureEnvelopeLayout(input: FailureEnvelopeInput): FailureEnvel
       segments.push({ x1: a.x, y1: a.y, x2: b.x, y2: b.y });
     }
   }
-  const crossings = drawings.flatMap((d) => (d.crossing ? [d.crossing] : []));
+  // The governing envelope's crossing is the failure point itself: one marker, not two.
+  const crossings = drawings.flatMap((d) =>
+    d.crossing &&
+    !(failurePoint && Math.hypot(d.crossing.x - failurePoint.x, d.crossing.y - failurePoint.y) < 3)
+      ? [d.crossing]
+      : [],
+  );
   const discs = [stressPoint, ...(failurePoint ? [failurePoint] : []), ...crossings].map((p) => ({
     cx: p.x,
     cy: p.y,
