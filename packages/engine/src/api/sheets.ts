@@ -45,7 +45,14 @@ export const SheetSummary = z
   .meta({ id: 'SheetSummary' });
 export type SheetSummary = z.infer<typeof SheetSummary>;
 
-export const SheetDetail = SheetSummary.extend({ content: SheetContentV1 }).meta({ id: 'SheetDetail' });
+/** The template (id and version) a sheet was made from; null when it was started otherwise. */
+export const SheetTemplateOrigin = z
+  .object({ id: z.string(), version: z.number().int() })
+  .nullable()
+  .meta({ id: 'SheetTemplateOrigin' });
+export type SheetTemplateOrigin = z.infer<typeof SheetTemplateOrigin>;
+
+export const SheetDetail = SheetSummary.extend({ content: SheetContentV1, template: SheetTemplateOrigin.optional() }).meta({ id: 'SheetDetail' });
 export type SheetDetail = z.infer<typeof SheetDetail>;
 
 export const SheetListResponse = z.object({ sheets: z.array(SheetSummary) }).meta({ id: 'SheetListResponse' });

@@ -45,6 +45,24 @@ describe('principal stresses of a lever under bending and torsion', () => {
   });
 });
 
+describe('principal stresses of a shaft in tension and torsion', () => {
+  const c = refCase('V-06');
+  it(caseTitle(c), () => {
+    // sigma = P / A, tau = 16 T / (π d³); the sign of tau does not change p1, p2.
+    const d = si(c.inputs.d);
+    const sx = si(c.inputs.P) / ((Math.PI * d * d) / 4);
+    const tau = (16 * si(c.inputs.T)) / (Math.PI * d ** 3);
+    expectNear(sx, c.expected.sx, 'sx');
+    expectNear(tau, c.expected.tau, 'tau');
+    for (const txy of [tau, -tau]) {
+      const p = principalPlaneStresses({ sx, sy: 0, txy });
+      expectNear(p.p1, c.expected.s1, 's1');
+      expectNear(p.p2, c.expected.s2, 's2');
+      expectNear(p.tauMaxInPlane, c.expected.tau_max_inplane, 'tau max in-plane');
+    }
+  });
+});
+
 describe('principal planes', () => {
   const c = refCase('C-06');
   it(`${caseTitle(c)}: the rotation by thetaP carries p1 and no shear`, () => {

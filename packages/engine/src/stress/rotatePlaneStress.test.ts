@@ -32,6 +32,16 @@ describe('rotatePlaneStress identities', () => {
     expect(Math.abs(q.sx - a.sy) + Math.abs(q.sy - a.sx) + Math.abs(q.txy + a.txy)).toBeLessThan(tol);
   });
 
+  const inv = refCase('C-05');
+  it(`${caseTitle(inv)}: sx' + sy' and sx' sy' - tx'y'² at every angle`, () => {
+    const s = state('C-05');
+    for (let deg = -180; deg <= 180; deg += 7.5) {
+      const r = rotatePlaneStress(s, (deg * Math.PI) / 180);
+      expectNear(r.sx + r.sy, inv.expected.I1_2d, `I1 at ${deg}°`);
+      expectNear(r.sx * r.sy - r.txy * r.txy, inv.expected.I2_2d, `I2 at ${deg}°`);
+    }
+  });
+
   it('zero angle returns the state (common practice, no source)', () => {
     expect(rotatePlaneStress({ sx: 5, sy: -3, txy: 2 }, 0)).toEqual({ sx: 5, sy: -3, txy: 2 });
   });
