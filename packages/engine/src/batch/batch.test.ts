@@ -7,7 +7,7 @@ import { THEORY_IDS } from '../criteria/types';
 import { principalPlaneStresses } from '../stress/principalPlane';
 import { principalStresses } from '../stress/principalStresses';
 import { allocatePrincipal, rowCount } from './columns';
-import { criterionFactorBatch, principalAndVonMisesBatch, summarizeFactors } from './factorBatch';
+import { criterionFactorBatch, principalAndVonMisesBatch, principalAndVonMisesPlaneBatch, summarizeFactors } from './factorBatch';
 import { principal3DBatch } from './principal3DBatch';
 import { principalPlaneBatch, vonMisesPlaneBatch } from './principalPlaneBatch';
 
@@ -63,6 +63,29 @@ describe('batch kernels against published cases', () => {
 });
 
 describe('batch kernels agree with the single-state functions (common practice, no source)', () => {
+  it('the fused 3D kernel gives the same principal stresses and the von Mises factor of the components', () => {
+    fc.assert(
+      fc.property(fc.array(fc.tuple(stress, stress, stress, stress, stress, stress), { minLength: 1, maxLength: 40 }), (rows) => {
+        const columns = {
+          sx: col(rows.map((r) => r[0])), sy: col(rows.map((r) => r[1])), sz: col(rows.map((r) => r[2])),
+          txy: col(rows.map((r) => r[3])), tyz: col(rows.map((r) => r[4])), tzx: col(rows.map((r) => r[5])),
+        };
+        const a = allocatePrincipal(rows.length);
+        const b = allocatePrincipal(rows.length);
+        const factors = new Float64Array(rows.length);
+        principal3DBatch(columns, a);
+        principalAndVonMisesBatch(columns, 250e6, b, factors);
+        expect(b).toEqual(a);
+        rows.forEach(([sx, sy, sz, txy, tyz, tzx], i) => {
+          const vm = Math.sqrt(0.5 * ((sx - sy) ** 2 + (sy - sz) ** 2 + (sz - sx) ** 2) + 3 * (txy ** 2 + tyz ** 2 + tzx ** 2));
+          if (vm === 0) expect(factors[i]).toBe(Infinity);
+          else expect(Math.abs(factors[i]! * vm - 250e6) / 250e6).toBeLessThan(1e-9);
+        });
+      }),
+      { numRuns: 100 },
+    );
+  });
+
   it('3D principal: batch = principalStresses = mathjs eigs within 1e-9 of the largest root', () => {
     fc.assert(
       fc.property(fc.array(fc.tuple(stress, stress, stress, stress, stress, stress), { minLength: 1, maxLength: 40 }), (rows) => {
@@ -156,6 +179,15 @@ describe('batch kernels agree with the single-state functions (common practice, 
     principalAndVonMisesBatch(full, 250e6, allocatePrincipal(4), factors);
     rows.forEach((_, i) => expect(factors[i]).toBeCloseTo(vm[i]! > 0 ? 250e6 / vm[i]! : Infinity, 9));
     expect(factors[3]).toBe(Infinity);
+    const q1 = new Float64Array(4);
+    const q2 = new Float64Array(4);
+    const planeFactors = new Float64Array(4);
+    principalAndVonMisesPlaneBatch(columns, 250e6, q1, q2, planeFactors);
+    rows.forEach((_, i) => {
+      expect(q1[i]).toBe(p1[i]);
+      expect(q2[i]).toBe(p2[i]);
+      expect(planeFactors[i]).toBeCloseTo(vm[i]! > 0 ? 250e6 / vm[i]! : Infinity, 9);
+    });
   });
 });
 

@@ -1,7 +1,7 @@
 import { THEORIES } from '../criteria/theories';
 import type { Strength, TheoryId } from '../criteria/types';
 import { allocatePrincipal, rowCount, type PrincipalColumns, type StressColumns } from './columns';
-import { principal3DBatch } from './principal3DBatch';
+import { principal3DBatch, principal3DLoop } from './principal3DBatch';
 
 /**
  * Factors of safety of many stress states against one theory (plain-number kernel). Plane
@@ -54,27 +54,43 @@ export function criterionFactorBatch(
 
 /**
  * Fused kernel for the commonest batch: the three principal stresses and the von Mises factor
- * Sy / σ' of 3D states in one pass (σ' from the components, so it does not depend on the cubic).
+ * Sy / σ' of 3D states in one pass (σ' = 3p of the cubic's solution, so it costs nothing extra).
  * Units: Pa. Infinity where σ' = 0.
  * @public
  */
-export function principalAndVonMisesBatch(
-  columns: Required<StressColumns>,
+export function principalAndVonMisesBatch(columns: StressColumns, Sy: number, principal: PrincipalColumns, factors: Float64Array): void {
+  if (!(Sy > 0)) throw new Error('Sy must be positive');
+  rowCount(columns);
+  principal3DLoop(columns, principal, factors, Sy);
+}
+
+/**
+ * Fused kernel for plane states: in-plane principal stresses p1 >= p2 and the von Mises factor
+ * Sy / sqrt(p1² - p1 p2 + p2²) in one pass. Units: Pa. Infinity where the state is zero.
+ * @public
+ */
+export function principalAndVonMisesPlaneBatch(
+  columns: Pick<StressColumns, 'sx' | 'sy' | 'txy'>,
   Sy: number,
-  principal: PrincipalColumns,
+  p1: Float64Array,
+  p2: Float64Array,
   factors: Float64Array,
 ): void {
-  principal3DBatch(columns, principal);
-  const { sx, sy, sz, txy, tyz, tzx } = columns;
+  const { sx, sy, txy } = columns;
   const n = sx.length;
   for (let i = 0; i < n; i++) {
     const a = sx[i]!;
     const b = sy[i]!;
-    const c = sz[i]!;
-    const d = txy[i]!;
-    const e = tyz[i]!;
-    const f = tzx[i]!;
-    const vm = Math.sqrt(0.5 * ((a - b) * (a - b) + (b - c) * (b - c) + (c - a) * (c - a)) + 3 * (d * d + e * e + f * f));
+    const t = txy[i]!;
+    const c = 0.5 * (a + b);
+    const h = 0.5 * (a - b);
+    const r = Math.sqrt(h * h + t * t);
+    const hi = c + r;
+    const lo = c - r;
+    p1[i] = hi;
+    p2[i] = lo;
+    // σ'² = p1² - p1 p2 + p2² = c² + 3r².
+    const vm = Math.sqrt(c * c + 3 * r * r);
     factors[i] = vm > 0 ? Sy / vm : Infinity;
   }
 }

@@ -1,4 +1,5 @@
 import { principalStresses } from '../stress/principalStresses';
+import { vonMisesStress } from '../stress/vonMises';
 import type { PrincipalColumns, StressColumns } from './columns';
 
 const SQRT3 = Math.sqrt(3);
@@ -26,6 +27,15 @@ const NEAR_DOUBLE = 1e-8;
  * @public
  */
 export function principal3DBatch(columns: StressColumns, out: PrincipalColumns): void {
+  principal3DLoop(columns, out, null, 0);
+}
+
+/**
+ * The loop behind {@link principal3DBatch}. With `extra`, it also writes per row the von Mises
+ * stress — which is 3p, since J2 = 3p² and σ' = sqrt(3 J2) — or, when `yieldStrength` > 0, the
+ * von Mises factor Sy / σ' (Infinity where σ' = 0), at no extra cost.
+ */
+export function principal3DLoop(columns: StressColumns, out: PrincipalColumns, extra: Float64Array | null, yieldStrength: number): void {
   const { sx, sy, txy } = columns;
   const n = sx.length;
   const zero = columns.sz ? null : new Float64Array(n);
@@ -35,6 +45,7 @@ export function principal3DBatch(columns: StressColumns, out: PrincipalColumns):
   const o1 = out.s1;
   const o2 = out.s2;
   const o3 = out.s3;
+  const factor = yieldStrength > 0;
   const hard: number[] = [];
   for (let i = 0; i < n; i++) {
     const a = sx[i]!;
@@ -52,6 +63,7 @@ export function principal3DBatch(columns: StressColumns, out: PrincipalColumns):
       o1[i] = q;
       o2[i] = q;
       o3[i] = q;
+      if (extra) extra[i] = factor ? Infinity : 0;
       continue;
     }
     const p = Math.sqrt(p2);
@@ -67,11 +79,17 @@ export function principal3DBatch(columns: StressColumns, out: PrincipalColumns):
     o1[i] = s1;
     o2[i] = 3 * q - s1 - s3;
     o3[i] = s3;
+    if (extra) extra[i] = factor ? yieldStrength / (3 * p) : 3 * p;
   }
   for (const i of hard) {
-    const v = principalStresses({ sx: sx[i]!, sy: sy[i]!, sz: sz[i]!, txy: txy[i]!, tyz: tyz[i]!, tzx: tzx[i]! }).values;
+    const t = { sx: sx[i]!, sy: sy[i]!, sz: sz[i]!, txy: txy[i]!, tyz: tyz[i]!, tzx: tzx[i]! };
+    const v = principalStresses(t).values;
     o1[i] = v[0];
     o2[i] = v[1];
     o3[i] = v[2];
+    if (extra) {
+      const vm = vonMisesStress(t);
+      extra[i] = factor ? (vm > 0 ? yieldStrength / vm : Infinity) : vm;
+    }
   }
 }
