@@ -20,6 +20,7 @@ import type { RouteKit } from './routes/kit';
 import { mountRoutes } from './routes/mountRoutes';
 import { organizationRoutes } from './routes/organizations';
 import { projectAndSheetRoutes } from './routes/projects';
+import { reviewRoutes } from './routes/review';
 import { systemRoutes } from './routes/system';
 
 export type { AppDeps } from './deps';
@@ -105,6 +106,7 @@ export function createApp(deps: AppDeps): Express {
     ...authRoutes(kit),
     ...organizationRoutes(),
     ...projectAndSheetRoutes(),
+    ...reviewRoutes(),
     ...devMailRoutes(deps.devInbox),
   ];
   app.locals.routes = routes;

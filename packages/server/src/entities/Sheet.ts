@@ -39,6 +39,18 @@ export class Sheet {
   @Column({ name: 'created_by_user_id', type: 'uuid', nullable: true })
   createdByUserId: string | null;
 
+  /** Who submitted the revision in preparation for check (the preparer); null before that. */
+  @Column({ name: 'prepared_by_user_id', type: 'uuid', nullable: true })
+  preparedByUserId: string | null;
+
+  /** The checker it was submitted to (or reassigned to); kept after a return for the next submission. */
+  @Column({ name: 'checker_user_id', type: 'uuid', nullable: true })
+  checkerUserId: string | null;
+
+  /** When it was last submitted for check. */
+  @Column({ name: 'submitted_at', type: 'timestamptz', nullable: true })
+  submittedAt: Date | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 

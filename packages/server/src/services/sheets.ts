@@ -3,6 +3,7 @@ import type { SheetContentV1, SheetDetail, SheetStatus, SheetSummary } from '@sh
 import { Project } from '../entities/Project';
 import { Sheet } from '../entities/Sheet';
 import { invalidField } from '../http/ApiError';
+import { assertDeletable, beginContentEdit } from './review/contentEdits';
 
 interface SummaryRow {
   id: string;
@@ -126,8 +127,11 @@ export async function updateSheet(
   dataSource: DataSource,
   sheet: Sheet,
   changes: { title?: string; projectId?: string },
+  actorUserId: string | null = null,
 ): Promise<SheetDetail> {
   await dataSource.transaction(async (manager) => {
+    // The title is part of the content: renaming follows the check workflow's edit rule.
+    if (changes.title !== undefined && changes.title !== sheet.title) await beginContentEdit(manager, sheet.id, actorUserId);
     if (changes.projectId !== undefined && changes.projectId !== sheet.projectId) {
       const target = await manager.findOneBy(Project, { id: changes.projectId, organizationId: sheet.organizationId });
       if (!target) throw invalidField('projectId', "no project with this id in the sheet's organization");
@@ -144,5 +148,8 @@ export async function updateSheet(
 }
 
 export async function deleteSheet(dataSource: DataSource, sheetId: string): Promise<void> {
-  await dataSource.getRepository(Sheet).delete({ id: sheetId });
+  await dataSource.transaction(async (manager) => {
+    await assertDeletable(manager, sheetId);
+    await manager.getRepository(Sheet).delete({ id: sheetId });
+  });
 }

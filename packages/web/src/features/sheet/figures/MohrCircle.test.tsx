@@ -228,6 +228,36 @@ describe('MohrCircle', () => {
     expect(x).toEqual(c);
   });
 
+  it('gives points on the same spot one label', () => {
+    const { container } = render(
+      <MohrCircle sx={0} sy={0} txy={50 * MPa} unit={unit} shearAxis="positive-down" />,
+    );
+    // Pure shear: Y sits on the top of the circle and X on its bottom.
+    expect(labelTexts(container)).toEqual(
+      [
+        'X = τmax (0.0, 50.0) MPa',
+        'Y = τmax (0.0, \u221250.0) MPa',
+        'p1 50.0 MPa',
+        'p2 \u221250.0 MPa',
+        'C 0.0 MPa',
+      ].sort(),
+    );
+  });
+
+  it('treats a circle too small to show in three figures as a point', () => {
+    const { container } = render(
+      <MohrCircle
+        sx={500 * MPa}
+        sy={500.0001 * MPa}
+        txy={0}
+        unit={unit}
+        shearAxis="positive-down"
+      />,
+    );
+    expect(container.querySelector('[data-part="circle"]')).toBeNull();
+    expect(screen.getByText(/τxy = 0 \(within display precision\)\./)).toBeTruthy();
+  });
+
   it('names itself for assistive technology', () => {
     renderCircle({ title: 'Lug weld toe' });
     const figure = screen.getByRole('img', { name: 'Lug weld toe' });

@@ -5,7 +5,11 @@
  * use the same tick step, as befits an equal-aspect plot.
  */
 
-import type { ViewTransform } from './figureGeometry';
+import {
+  createViewTransform,
+  type ViewTransform,
+  type ViewTransformOptions,
+} from './figureGeometry';
 import type { DisplayUnit } from './figureTypes';
 import { tickFontSize } from './figurePalette';
 import { formatNumber } from './formatQuantity';
@@ -53,6 +57,8 @@ export interface AxesLayout {
    * be placed after the figure's own labels so it gives way to them.
    */
   captionRequests: LabelRequest[];
+  /** Width of the widest tick label of the vertical axis, to size the left padding. */
+  yTickLabelWidth: number;
   /** The axis lines, for the label placer. */
   obstacleSegments: Array<{ x1: number; y1: number; x2: number; y2: number }>;
 }
@@ -67,15 +73,28 @@ export function axesLayout(view: ViewTransform, options: AxesOptions): AxesLayou
   };
   const { visible } = view;
 
-  // One step for both axes, chosen on the longer side.
-  const spacing = options.tickSpacing ?? 64;
+  // One step for both axes, chosen on the longer side, widened until the longest tick label
+  // fits between two ticks.
   const longer = view.plot.width >= view.plot.height;
   const span = (longer ? visible.xMax - visible.xMin : visible.yMax - visible.yMin) * unit.perPa;
   const pixels = longer ? view.plot.width : view.plot.height;
-  const step = niceStep(span, Math.max(2, pixels / spacing));
+  let spacing = options.tickSpacing ?? 64;
+  let step = niceStep(span, Math.max(2, pixels / spacing));
+  for (let attempt = 0; attempt < 4; attempt++) {
+    const decimalsNow = stepDecimals(step);
+    const widest = Math.max(
+      ...[visible.xMin, visible.xMax].map((x) =>
+        estimateTextWidth(formatNumber(x * unit.perPa, { decimals: decimalsNow }), tickFontSize),
+      ),
+    );
+    if ((step / unit.perPa) * view.scale >= widest + 12) break;
+    spacing = widest + 16;
+    step = niceStep(span, Math.max(1, pixels / spacing));
+  }
   const decimals = stepDecimals(step);
-  const tickLabel = (value: number) =>
-    formatNumber(value, { reference: 1 / 10 ** decimals, significant: 1 });
+  // Exactly the step's decimals, never an exponent: a tiny circle far from zero still gets
+  // readable (if long) ticks such as 500.00002.
+  const tickLabel = (value: number) => formatNumber(value, { decimals });
 
   // The horizontal caption closes the row of tick labels under the frame, at its right end;
   // tick labels it would cover are left out.
@@ -134,6 +153,28 @@ export function axesLayout(view: ViewTransform, options: AxesOptions): AxesLayou
     yPositive,
     xCaption,
     captionRequests,
+    yTickLabelWidth: Math.max(0, ...yTicks.map((t) => estimateTextWidth(t.label, tickFontSize))),
     obstacleSegments,
   };
+}
+
+/**
+ * The view and its axes together, with the left padding widened when the vertical axis's tick
+ * labels need more room than `padding.left` leaves (e.g. stresses printed in Pa).
+ */
+export function viewWithAxes(
+  viewOptions: ViewTransformOptions,
+  axesOptions: AxesOptions,
+): { view: ViewTransform; axes: AxesLayout } {
+  let view = createViewTransform(viewOptions);
+  let axes = axesLayout(view, axesOptions);
+  const needed = axes.yTickLabelWidth + 10;
+  if (needed > viewOptions.padding.left) {
+    view = createViewTransform({
+      ...viewOptions,
+      padding: { ...viewOptions.padding, left: needed },
+    });
+    axes = axesLayout(view, axesOptions);
+  }
+  return { view, axes };
 }

@@ -4,8 +4,8 @@
  * legend.
  */
 
-import { axesLayout, type AxesLayout } from './axesLayout';
-import { createViewTransform, loadLineFactor, type ViewTransform } from './figureGeometry';
+import { viewWithAxes, type AxesLayout } from './axesLayout';
+import { loadLineFactor, type ViewTransform } from './figureGeometry';
 import { labelFontSize, seriesStyles, type SeriesStyle } from './figurePalette';
 import type { DisplayUnit, Point2 } from './figureTypes';
 import { formatFactor, formatStressNumber } from './formatQuantity';
@@ -137,20 +137,22 @@ export function failureEnvelopeLayout(input: FailureEnvelopeInput): FailureEnvel
   if (xMax - xMin < span * 0.05) [xMin, xMax] = [xMin - span * 0.1, xMax + span * 0.1];
   if (yMax - yMin < span * 0.05) [yMin, yMax] = [yMin - span * 0.1, yMax + span * 0.1];
 
-  const view = createViewTransform({
-    world: { xMin, xMax, yMin, yMax },
-    width,
-    height,
-    padding,
-    margin: { top: 22, right: 22, bottom: 22, left: 22 },
-  });
-  const axes = axesLayout(view, {
-    unit,
-    xCaption: `σA (${unit.label})`,
-    yCaption: `σB (${unit.label})`,
-    ySign: 1,
-    fontSize: labelFontSize,
-  });
+  const { view, axes } = viewWithAxes(
+    {
+      world: { xMin, xMax, yMin, yMax },
+      width,
+      height,
+      padding,
+      margin: { top: 22, right: 22, bottom: 22, left: 22 },
+    },
+    {
+      unit,
+      xCaption: `σA (${unit.label})`,
+      yCaption: `σB (${unit.label})`,
+      ySign: 1,
+      fontSize: labelFontSize,
+    },
+  );
 
   const origin = view.toScreen(0, 0);
   const stressPoint = view.toScreen(point.sA, point.sB);

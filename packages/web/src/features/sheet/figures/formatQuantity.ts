@@ -7,6 +7,12 @@ import type { DisplayUnit } from './figureTypes';
 
 const minus = '\u2212';
 
+/**
+ * Relative size below which a difference does not show when the largest value is printed with
+ * three significant figures; the figures treat smaller radii as zero.
+ */
+export const displayResolution = 5e-5;
+
 export interface NumberFormatOptions {
   /** Significant figures of the reference magnitude; default 3. */
   significant?: number;

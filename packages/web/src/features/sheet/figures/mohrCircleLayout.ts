@@ -4,9 +4,8 @@
  * Kept apart from the component so the geometry is testable without rendering.
  */
 
-import { axesLayout, type AxesLayout } from './axesLayout';
+import { viewWithAxes, type AxesLayout } from './axesLayout';
 import {
-  createViewTransform,
   mohrPlaneGeometry,
   mohrPlotPoint,
   mohrPlotY,
@@ -19,7 +18,7 @@ import {
 } from './figureGeometry';
 import { labelFontSize } from './figurePalette';
 import type { DisplayUnit, Point2, ShearAxisConvention } from './figureTypes';
-import { formatAngle, formatStress, formatStressNumber } from './formatQuantity';
+import { displayResolution, formatAngle, formatStress, formatStressNumber } from './formatQuantity';
 import {
   estimateTextWidth,
   fanDirections,
@@ -80,6 +79,17 @@ export interface MohrCircleLayout {
 }
 
 const footerLineHeight = 15;
+const pointName: Record<MohrPointId, string> = {
+  X: 'X',
+  Y: 'Y',
+  Xr: 'X′',
+  Yr: 'Y′',
+  p1: 'p1',
+  p2: 'p2',
+  top: 'τmax',
+  bottom: 'τmax',
+  C: 'C',
+};
 const footerLines = 2;
 
 /** Lay out a Mohr's circle of the plane state (see `MohrCircle` for the meaning of the props). */
@@ -88,7 +98,9 @@ export function mohrCircleLayout(input: MohrCircleInput): MohrCircleLayout {
   const geometry = mohrPlaneGeometry({ sx, sy, txy });
   const { centre, radius } = geometry;
   const magnitude = Math.max(Math.abs(sx), Math.abs(sy), Math.abs(txy), Math.abs(centre) + radius);
-  const degenerate = radius <= 1e-9 * magnitude;
+  // A circle smaller than the labels can resolve (three figures of the largest stress) is drawn
+  // and reported as a point.
+  const degenerate = radius <= displayResolution * magnitude;
 
   const reference = Math.max(magnitude, Math.abs(rotated?.sxr ?? 0), Math.abs(rotated?.syr ?? 0));
   const n = (valuePa: number) => formatStressNumber(valuePa, unit, { reference });
@@ -134,25 +146,26 @@ export function mohrCircleLayout(input: MohrCircleInput): MohrCircleLayout {
     Math.max(widestSideLabel + 14, 56),
     0.27 * (width - padding.left - padding.right),
   );
-  const view = createViewTransform({
-    world: mohrWorldBox(geometry, degenerate, unit),
-    width,
-    height,
-    padding,
-    // Room above and below for the τmax labels and the τ caption at the axis's positive end;
-    // the same both ways so a change of convention moves nothing.
-    margin: { top: 40, right: sideMargin, bottom: 40, left: sideMargin },
-  });
-
-  const axes = axesLayout(view, {
-    unit,
-    xCaption: `σ (${unit.label})`,
-    yCaption: positiveDown
-      ? `τ (${unit.label}) positive down`
-      : `τ (${unit.label}) clockwise positive, up`,
-    ySign: positiveDown ? -1 : 1,
-    fontSize: labelFontSize,
-  });
+  const { view, axes } = viewWithAxes(
+    {
+      world: mohrWorldBox(geometry, degenerate, unit),
+      width,
+      height,
+      padding,
+      // Room above and below for the τmax labels and the τ caption at the axis's positive end;
+      // the same both ways so a change of convention moves nothing.
+      margin: { top: 40, right: sideMargin, bottom: 40, left: sideMargin },
+    },
+    {
+      unit,
+      xCaption: `σ (${unit.label})`,
+      yCaption: positiveDown
+        ? `τ (${unit.label}) positive down`
+        : `τ (${unit.label}) clockwise positive, up`,
+      ySign: positiveDown ? -1 : 1,
+      fontSize: labelFontSize,
+    },
+  );
 
   const centreScreen = view.toScreen(centre, 0);
   const circle = { cx: centreScreen.x, cy: centreScreen.y, r: radius * view.scale };
@@ -196,19 +209,36 @@ export function mohrCircleLayout(input: MohrCircleInput): MohrCircleLayout {
         { id: 'C', base: () => Math.PI / 2 },
       ];
 
-  const requests: LabelRequest[] = [];
+  // Points that fall on the same spot (Y on the top of a pure-shear circle, X′ dragged onto p1)
+  // share one label: "Y = τmax (0.0, −50.0) MPa".
+  const groups: Array<{ id: MohrPointId; members: MohrPointId[]; base: number }> = [];
   for (const { id, base } of labelOrder) {
     const p = points[id];
     if (!p) continue;
-    requests.push({
+    const same = groups.find((group) => {
+      const q = points[group.id];
+      return q !== undefined && Math.hypot(q.screen.x - p.screen.x, q.screen.y - p.screen.y) < 1;
+    });
+    if (same) same.members.push(id);
+    else groups.push({ id, members: [id], base: base(p) });
+  }
+  const requests: LabelRequest[] = groups.map(({ id, members, base }) => {
+    const p = points[id] as MohrPlotPoint;
+    const single = members.every((member) => member === 'p1' || member === 'p2' || member === 'C');
+    const text =
+      members.length === 1
+        ? labelText[id](p)
+        : `${members.map((member) => pointName[member]).join(' = ')} ` +
+          (single ? `${n(p.sigma)} ${unit.label}` : pair(p));
+    return {
       id,
-      text: labelText[id](p),
+      text,
       x: p.screen.x,
       y: p.screen.y,
-      directions: fanDirections(base(p)),
+      directions: fanDirections(base),
       fontSize: labelFontSize,
-    });
-  }
+    };
+  });
 
   const arc =
     rotated && !degenerate ? rotationArc(circle, points, rotated.angleRad, shearAxis) : null;
@@ -248,7 +278,8 @@ export function mohrCircleLayout(input: MohrCircleInput): MohrCircleLayout {
   const stress = (valuePa: number) => formatStress(valuePa, unit, { reference });
   const footerText = degenerate
     ? [
-        `Hydrostatic in plane: σx = σy = ${stress(centre)}, τxy = 0.`,
+        `Hydrostatic in plane: σx = σy = ${stress(centre)}, τxy = 0` +
+          (radius === 0 ? '.' : ' (within display precision).'),
         'The circle is a point: every direction is principal, no plane carries shear.',
       ]
     : [

@@ -4,9 +4,8 @@
  * optional (σ, τ) point on some plane.
  */
 
-import { axesLayout, type AxesLayout } from './axesLayout';
+import { viewWithAxes, type AxesLayout } from './axesLayout';
 import {
-  createViewTransform,
   mohrPlotY,
   rangeWithOriginIfClose,
   shearAxisPositiveDirection,
@@ -14,7 +13,7 @@ import {
 } from './figureGeometry';
 import { labelFontSize } from './figurePalette';
 import type { DisplayUnit, Point2, ShearAxisConvention } from './figureTypes';
-import { formatStress, formatStressNumber } from './formatQuantity';
+import { displayResolution, formatStress, formatStressNumber } from './formatQuantity';
 import { fanDirections, placeLabels, type LabelRequest, type PlacedLabel } from './placeLabels';
 
 export interface MohrCircles3DInput {
@@ -83,7 +82,8 @@ export function mohrCircles3DLayout(input: MohrCircles3DInput): MohrCircles3DLay
     Math.abs(point?.sigma ?? 0),
     Math.abs(point?.tau ?? 0),
   );
-  const tolerance = 1e-9 * magnitude;
+  // Differences the labels cannot resolve count as equal (see `displayResolution`).
+  const tolerance = displayResolution * magnitude;
   const hydrostatic = tauMax <= tolerance;
 
   const half = hydrostatic ? (s1 !== 0 ? Math.abs(s1) / 2 : 1 / unit.perPa) : tauMax;
@@ -102,22 +102,25 @@ export function mohrCircles3DLayout(input: MohrCircles3DInput): MohrCircles3DLay
     bottom: 24 + footerLines * footerLineHeight,
     left: 44,
   };
-  const view = createViewTransform({
-    world: { xMin, xMax, yMin: -yHalf, yMax: yHalf },
-    width,
-    height,
-    padding,
-    // Room above and below for the τmax label and the τ caption at the axis's positive end.
-    margin: { top: 40, right: 70, bottom: 40, left: 70 },
-  });
-
-  const axes = axesLayout(view, {
-    unit,
-    xCaption: `σ (${unit.label})`,
-    yCaption: down ? `τ (${unit.label}) positive down` : `τ (${unit.label}) clockwise positive, up`,
-    ySign: down ? -1 : 1,
-    fontSize: labelFontSize,
-  });
+  const { view, axes } = viewWithAxes(
+    {
+      world: { xMin, xMax, yMin: -yHalf, yMax: yHalf },
+      width,
+      height,
+      padding,
+      // Room above and below for the τmax label and the τ caption at the axis's positive end.
+      margin: { top: 40, right: 70, bottom: 40, left: 70 },
+    },
+    {
+      unit,
+      xCaption: `σ (${unit.label})`,
+      yCaption: down
+        ? `τ (${unit.label}) positive down`
+        : `τ (${unit.label}) clockwise positive, up`,
+      ySign: down ? -1 : 1,
+      fontSize: labelFontSize,
+    },
+  );
 
   const circle = (id: PrincipalCircleId, a: number, b: number): PrincipalCircle => {
     const c = (a + b) / 2;
