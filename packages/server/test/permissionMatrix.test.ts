@@ -17,12 +17,15 @@ import {
   type Team,
   type TestUser,
 } from './helpers/fixtures';
+import { approvedSheet, lugSheetIn, noteOn, sheetInCheck } from './helpers/review';
 import type { TestClient } from './helpers/TestClient';
 import { startTestServer, type TestServer } from './helpers/testServer';
 
 /** A request that succeeds for a caller the route admits. */
 interface Call {
   params?: Record<string, string>;
+  /** A query string, without the `?`. */
+  query?: string;
   body?: unknown;
 }
 
@@ -97,7 +100,52 @@ const CALLS: Record<string, (ctx: CallContext) => Promise<Call>> = {
     const sheet = await createSheetIn(server.deps.dataSource, team.project, team.users.engineer.id, 'To be deleted');
     return { params: { sheetId: sheet.id } };
   },
+  // The check workflow. Per-sheet rules (only the assigned checker, never the preparer) are
+  // met by the setup, so the table alone decides each cell of the matrix.
+  'review.state': async ({ team }) => ({ params: { sheetId: team.sheet.id } }),
+  'review.submit': async ({ server, team }) => ({
+    params: { sheetId: await lugSheetIn(server.deps.dataSource, team) },
+    body: { checkerUserId: team.users.checker.id, message: 'Ready for check' },
+  }),
+  'review.return': async ({ server, team, actor, user }) => ({
+    params: { sheetId: await sheetInCheck(server.deps.dataSource, team, checkerFor(team, actor, user)) },
+    body: { message: 'Section modulus uses the wrong width' },
+  }),
+  'review.approve': async ({ server, team, actor, user }) => ({
+    params: { sheetId: await sheetInCheck(server.deps.dataSource, team, checkerFor(team, actor, user)) },
+    body: {},
+  }),
+  'review.reassignChecker': async ({ server, team }) => ({
+    params: { sheetId: await sheetInCheck(server.deps.dataSource, team, team.users.checker.id) },
+    body: { checkerUserId: team.users.owner.id },
+  }),
+  'notes.list': async ({ team }) => ({ params: { sheetId: team.sheet.id } }),
+  'notes.create': async ({ server, team }) => ({
+    params: { sheetId: await lugSheetIn(server.deps.dataSource, team) },
+    body: { cellId: 's1', body: 'Is the bending lever arm measured from the weld toe?' },
+  }),
+  'notes.resolve': async ({ server, team }) => {
+    const sheetId = await lugSheetIn(server.deps.dataSource, team);
+    return { params: { sheetId, noteId: await noteOn(server.deps.dataSource, sheetId, team.users.checker.id) } };
+  },
+  'notes.reopen': async ({ server, team }) => {
+    const sheetId = await lugSheetIn(server.deps.dataSource, team);
+    return { params: { sheetId, noteId: await noteOn(server.deps.dataSource, sheetId, team.users.checker.id, { resolved: true }) } };
+  },
+  'revisions.list': async ({ team }) => ({ params: { sheetId: team.sheet.id } }),
+  'revisions.get': async ({ server, team }) => ({ params: { sheetId: await approvedSheet(server.deps.dataSource, team), number: '1' } }),
+  'revisions.diff': async ({ server, team }) => ({
+    params: { sheetId: await approvedSheet(server.deps.dataSource, team) },
+    query: 'from=1&to=current',
+  }),
+  'sheets.history': async ({ team }) => ({ params: { sheetId: team.sheet.id } }),
 };
+
+/** The checker to submit to so that `actor` may return or approve: the actor when their role checks. */
+function checkerFor(team: Team, actor: Actor, user: TestUser | undefined): string {
+  return user !== undefined && (actor === 'owner' || actor === 'checker') ? user.id : team.users.checker.id;
+}
+
 
 /** Routes after which the client's session is another one (or none). */
 const SESSION_CHANGING = new Set(['auth.signin', 'auth.signup', 'auth.signout']);
@@ -149,13 +197,16 @@ describe('route x role matrix, generated from the route table and the permission
     // One signed-in client per actor; routes that replace the session get a fresh one each time.
     const clients = new Map<Actor, TestClient>();
     for (const actor of ACTORS) clients.set(actor, await signInAs(server, team, actor));
-    for (const route of server.routes) {
+    // A route without a CALLS entry fails the test above; here the others are still checked.
+    const callable = server.routes.filter((route) => route.id in CALLS);
+    for (const route of callable) {
       for (const actor of ACTORS) {
         const expected = expectedStatus(route, actor);
         const client = SESSION_CHANGING.has(route.id) ? await signInAs(server, team, actor) : (clients.get(actor) as TestClient);
         const user = actor === 'anonymous' ? undefined : team.users[actor];
         const call = await (CALLS[route.id] as (ctx: CallContext) => Promise<Call>)({ server, team, actor, user });
-        const response = await client.request(route.method.toUpperCase(), fillPath(route.path, call.params), { body: call.body });
+        const path = fillPath(route.path, call.params) + (call.query ? `?${call.query}` : '');
+        const response = await client.request(route.method.toUpperCase(), path, { body: call.body });
         const cell = `${route.method.toUpperCase()} ${route.path} as ${actor}: expected ${expected.status}${expected.code ? ` ${expected.code}` : ''}, got ${response.status} ${response.status >= 400 ? JSON.stringify(response.body) : ''}`;
         cells.push(cell);
         const codeOk = expected.code === undefined || response.body?.error?.code === expected.code;
@@ -163,8 +214,9 @@ describe('route x role matrix, generated from the route table and the permission
       }
     }
     expect(failures).toEqual([]);
-    expect(cells).toHaveLength(server.routes.length * ACTORS.length);
-  });
+    expect(cells).toHaveLength(callable.length * ACTORS.length);
+    // Every route x six callers, with fresh fixtures per call: far longer than one request.
+  }, 300_000);
 
   it('really exercises all three refusals and success for organization routes', () => {
     const permissionRoutes = server.routes.filter((r) => r.access.kind === 'permission');

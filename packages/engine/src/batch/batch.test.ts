@@ -126,6 +126,44 @@ describe('batch kernels agree with the single-state functions (common practice, 
     });
   });
 
+  it('close roots on both sides of the robust-path threshold stay within 1e-12 of the largest root', () => {
+    // R diag(a, a + g, b) Rᵀ with the gap g from 1e-9 to 1 of |a - b|: |r| passes 1 - 1e-8 in this range.
+    const rot = (x: number, y: number, z: number) => {
+      const [cx, sx, cy, sy, cz, sz] = [Math.cos(x), Math.sin(x), Math.cos(y), Math.sin(y), Math.cos(z), Math.sin(z)];
+      return [
+        [cz * cy, cz * sy * sx - sz * cx, cz * sy * cx + sz * sx],
+        [sz * cy, sz * sy * sx + cz * cx, sz * sy * cx - cz * sx],
+        [-sy, cy * sx, cy * cx],
+      ];
+    };
+    fc.assert(
+      fc.property(
+        fc.double({ min: -300e6, max: 300e6, noNaN: true }),
+        fc.double({ min: -300e6, max: 300e6, noNaN: true }),
+        fc.double({ min: -9, max: 0, noNaN: true }),
+        fc.double({ min: 0, max: 6.3, noNaN: true }),
+        fc.double({ min: 0, max: 6.3, noNaN: true }),
+        fc.double({ min: 0, max: 6.3, noNaN: true }),
+        (a, b, logGap, x, y, z) => {
+          fc.pre(Math.abs(a - b) > 1e3);
+          const d = [a, a + Math.abs(a - b) * 10 ** logGap, b];
+          const R = rot(x, y, z);
+          const m = (i: number, j: number) => d.reduce((acc, di, k) => acc + R[i]![k]! * di * R[j]![k]!, 0);
+          const t = { sx: m(0, 0), sy: m(1, 1), sz: m(2, 2), txy: m(0, 1), tyz: m(1, 2), tzx: m(0, 2) };
+          const columns = { sx: col([t.sx]), sy: col([t.sy]), sz: col([t.sz]), txy: col([t.txy]), tyz: col([t.tyz]), tzx: col([t.tzx]) };
+          const out = allocatePrincipal(1);
+          principal3DBatch(columns, out);
+          const ref = principalStresses(t).values;
+          const scale = Math.max(...ref.map(Math.abs));
+          expect(Math.abs(out.s1[0]! - ref[0]) / scale).toBeLessThan(1e-12);
+          expect(Math.abs(out.s2[0]! - ref[1]) / scale).toBeLessThan(1e-12);
+          expect(Math.abs(out.s3[0]! - ref[2]) / scale).toBeLessThan(1e-12);
+        },
+      ),
+      { numRuns: 500 },
+    );
+  });
+
   it('every theory: batch factors = checkCriterion factors, plane and 3D', () => {
     const strengths = {
       'von-mises': { Sy: 250e6 },

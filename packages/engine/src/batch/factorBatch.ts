@@ -54,7 +54,7 @@ export function criterionFactorBatch(
 
 /**
  * Fused kernel for the commonest batch: the three principal stresses and the von Mises factor
- * Sy / σ' of 3D states in one pass (σ' = 3p of the cubic's solution, so it costs nothing extra).
+ * Sy / σ' of 3D states in one pass over the columns.
  * Units: Pa. Infinity where σ' = 0.
  * @public
  */

@@ -124,6 +124,13 @@ describe('incremental re-evaluation', () => {
     expect(shared.evaluated).toEqual(['E', 'c0', 'c1', 'c2', 'c3', 'c4']);
   });
 
+  it('an unchanged cell is not re-evaluated', () => {
+    const ev = createEvaluator({ cells: groups(2) });
+    const before = ev.evaluations;
+    expect(ev.update(q('f1', 'F1', '11 kN'))).toEqual({ evaluated: [] });
+    expect(ev.evaluations).toBe(before);
+  });
+
   it('rename, remove and insert touch the cells that referred to either name', () => {
     const ev = createEvaluator({ cells: groups(2) });
     const renamed = ev.update(q('f1', 'G1', '11 kN'));

@@ -212,6 +212,8 @@ export function createEvaluator(sheet: SheetInput, options: EvaluatorOptions = {
 
   function replaceAt(position: number, cell: CellInput): UpdateReport {
     const old = entries[position]!;
+    // An unchanged cell (a collaborator's echo, a re-sent edit) needs no evaluation at all.
+    if (old.raw === cell || JSON.stringify(old.raw) === JSON.stringify(cell)) return { evaluated: [] };
     const entry = entryOf(cell, position);
     entries = entries.map((e, i) => (i === position ? entry : e));
     const before = rebuild();
