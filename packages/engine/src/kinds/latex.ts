@@ -33,12 +33,6 @@ export function texName(name: string): string {
   return new SymbolNode(name).toTex();
 }
 
-/** The display unit of a measure as LaTeX, e.g. `\mathrm{MPa}`; '' for plain numbers. */
-export function texUnit(measure: Measure, system: UnitSystemId): string {
-  const f = formatQuantity(1, measure, system);
-  return f.latex.replace(/^[^\\^]*(\\,)?/, '');
-}
-
 /**
  * An expression as LaTeX; with `substitute`, names it returns LaTeX for are replaced (the
  * referenced cells' values). An expression that does not parse is shown as text.
