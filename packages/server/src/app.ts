@@ -19,9 +19,11 @@ import { devMailRoutes } from './routes/devMail';
 import type { RouteKit } from './routes/kit';
 import { mountRoutes } from './routes/mountRoutes';
 import { organizationRoutes } from './routes/organizations';
+import { materialRoutes } from './routes/materials';
 import { projectAndSheetRoutes } from './routes/projects';
 import { reviewRoutes } from './routes/review';
 import { systemRoutes } from './routes/system';
+import { templateRoutes } from './routes/templates';
 
 export type { AppDeps } from './deps';
 
@@ -106,6 +108,8 @@ export function createApp(deps: AppDeps): Express {
     ...authRoutes(kit),
     ...organizationRoutes(),
     ...projectAndSheetRoutes(),
+    ...materialRoutes(),
+    ...templateRoutes(),
     ...reviewRoutes(),
     ...devMailRoutes(deps.devInbox),
   ];

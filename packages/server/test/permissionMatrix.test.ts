@@ -18,6 +18,7 @@ import {
   type TestUser,
 } from './helpers/fixtures';
 import { approvedSheet, lugSheetIn, noteOn, sheetInCheck } from './helpers/review';
+import { demoMaterialBody, insertDemoMaterial, insertDemoTemplate, uniqueMaterialKey } from './helpers/libraryFixtures';
 import type { TestClient } from './helpers/TestClient';
 import { startTestServer, type TestServer } from './helpers/testServer';
 
@@ -100,6 +101,35 @@ const CALLS: Record<string, (ctx: CallContext) => Promise<Call>> = {
     const sheet = await createSheetIn(server.deps.dataSource, team.project, team.users.engineer.id, 'To be deleted');
     return { params: { sheetId: sheet.id } };
   },
+  // The materials library and templates.
+  'materials.list': async ({ team }) => ({ params: { orgId: team.organizationId } }),
+  'materials.create': async ({ team }) => ({ params: { orgId: team.organizationId }, body: { id: uniqueMaterialKey(), ...demoMaterialBody() } }),
+  'materials.update': async ({ server, team }) => ({
+    params: { orgId: team.organizationId, materialKey: await insertDemoMaterial(server.deps.dataSource, team) },
+    body: demoMaterialBody('Matrix plate steel, renamed'),
+  }),
+  'materials.delete': async ({ server, team }) => ({
+    params: { orgId: team.organizationId, materialKey: await insertDemoMaterial(server.deps.dataSource, team) },
+  }),
+  'materials.export': async ({ team }) => ({ params: { orgId: team.organizationId } }),
+  'materials.import': async ({ team }) => ({
+    params: { orgId: team.organizationId },
+    body: { csv: `id,name,category,Sy,Sy_basis,Sy_source\n${uniqueMaterialKey()},Imported plate (demo),carbon-steel,300 MPa,minimum,Demo certificate` },
+  }),
+  'templates.list': async ({ team }) => ({ params: { orgId: team.organizationId } }),
+  'templates.get': async ({ team }) => ({ params: { orgId: team.organizationId, templateId: 'builtin:thin-walled-sphere' } }),
+  'templates.createFromSheet': async ({ team }) => ({
+    params: { sheetId: team.sheet.id },
+    body: { title: 'Matrix template', description: '', category: 'Lifting gear', parameters: [] },
+  }),
+  'templates.newVersion': async ({ server, team }) => ({
+    params: { orgId: team.organizationId, templateId: await insertDemoTemplate(server.deps.dataSource, team) },
+    body: { title: 'Matrix lug, v2', description: '', category: 'Lifting gear', parameters: [] },
+  }),
+  'sheets.createFromTemplate': async ({ team }) => ({
+    params: { projectId: team.project.id },
+    body: { templateId: 'builtin:thin-walled-sphere', title: 'Matrix receiver', parameters: { p: '2 MPa', r: '300 mm', t: '8 mm' } },
+  }),
   // The check workflow. Per-sheet rules (only the assigned checker, never the preparer) are
   // met by the setup, so the table alone decides each cell of the matrix.
   'review.state': async ({ team }) => ({ params: { sheetId: team.sheet.id } }),
@@ -145,7 +175,6 @@ const CALLS: Record<string, (ctx: CallContext) => Promise<Call>> = {
 function checkerFor(team: Team, actor: Actor, user: TestUser | undefined): string {
   return user !== undefined && (actor === 'owner' || actor === 'checker') ? user.id : team.users.checker.id;
 }
-
 
 /** Routes after which the client's session is another one (or none). */
 const SESSION_CHANGING = new Set(['auth.signin', 'auth.signup', 'auth.signout']);

@@ -51,6 +51,14 @@ export class Sheet {
   @Column({ name: 'submitted_at', type: 'timestamptz', nullable: true })
   submittedAt: Date | null;
 
+  /** The template it was made from: a template's UUID or `builtin:<key>`; null for a sheet started empty. */
+  @Column({ name: 'template_id', type: 'varchar', length: 100, nullable: true })
+  templateId: string | null;
+
+  /** The version of that template. */
+  @Column({ name: 'template_version', type: 'integer', nullable: true })
+  templateVersion: number | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 

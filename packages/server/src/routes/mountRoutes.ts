@@ -12,6 +12,8 @@ const PARAM_NAMES: Record<string, string> = {
   projectId: 'project',
   sheetId: 'sheet',
   token: 'invitation',
+  templateId: 'template',
+  materialKey: 'material',
 };
 
 function describeParam(path: readonly PropertyKey[]): string {
