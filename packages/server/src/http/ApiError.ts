@@ -1,4 +1,4 @@
-import type { ErrorCode } from '@sheaf/engine/api';
+import type { ErrorCode, ErrorDetail } from '@sheaf/engine/api';
 
 /**
  * An error the API answers with: an HTTP status, a code from the contract, and a message that
@@ -12,10 +12,14 @@ export class ApiError extends Error {
     readonly status: number,
     readonly code: ErrorCode,
     message: string,
-    options?: ErrorOptions,
+    options?: ErrorOptions & { details?: ErrorDetail[] },
   ) {
     super(message, options);
+    this.details = options?.details;
   }
+
+  /** Each problem, when the request has several (the bad rows of an uploaded file). */
+  readonly details: ErrorDetail[] | undefined;
 }
 
 export function invalidField(field: string, problem: string): ApiError {

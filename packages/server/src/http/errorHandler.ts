@@ -38,7 +38,7 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, next) => {
   const known = toApiError(error);
   const status = known?.status ?? 500;
   const body: ErrorBody = known
-    ? { error: { code: known.code, message: known.message } }
+    ? { error: { code: known.code, message: known.message, ...(known.details ? { details: known.details } : {}) } }
     : { error: { code: 'internal', message: 'the server failed to answer this request; it has been logged' } };
   if (!known) req.log?.error({ err: error }, 'request failed');
   res.status(status).json(body);

@@ -81,23 +81,24 @@ export async function listSheets(dataSource: DataSource, filter: SheetFilter): P
 
 /** The full sheet, with its project's name. */
 export async function sheetDetail(dataSource: DataSource, sheetId: string): Promise<SheetDetail> {
-  const rows: (SummaryRow & { content: SheetContentV1 })[] = await dataSource.query(
-    `SELECT ${SUMMARY_COLUMNS}, s.content FROM sheets s JOIN projects p ON p.id = s.project_id WHERE s.id = $1`,
+  const rows: (SummaryRow & { content: SheetContentV1; template_id: string | null; template_version: number | null })[] = await dataSource.query(
+    `SELECT ${SUMMARY_COLUMNS}, s.content, s.template_id, s.template_version FROM sheets s JOIN projects p ON p.id = s.project_id WHERE s.id = $1`,
     [sheetId],
   );
   const row = rows[0];
   if (!row) throw new Error(`sheet ${sheetId} vanished while being read`);
-  return { ...toSummary(row), content: row.content };
+  const template = row.template_id === null || row.template_version === null ? null : { id: row.template_id, version: row.template_version };
+  return { ...toSummary(row), content: row.content, template };
 }
 
 /**
  * Creates a sheet in a project under the project's next calc number (`GBL-004`). The content's
- * title follows the sheet's title.
+ * title follows the sheet's title. `template` records the template id and version it was made from.
  */
 export async function createSheet(
   dataSource: DataSource,
   project: Project,
-  input: { title: string; content?: SheetContentV1; createdByUserId: string },
+  input: { title: string; content?: SheetContentV1; createdByUserId: string; template?: { id: string; version: number } },
 ): Promise<SheetDetail> {
   const id = await dataSource.transaction(async (manager) => {
     // Taking the number and inserting in one transaction keeps calc numbers gap-free under concurrency.
@@ -110,9 +111,18 @@ export async function createSheet(
     if (!allocated) throw new Error(`project ${project.id} vanished while adding a sheet`);
     const content = { ...(input.content ?? emptySheetContent(input.title)), title: input.title };
     const inserted: { id: string }[] = await manager.query(
-      `INSERT INTO sheets (organization_id, project_id, title, calc_number, content, created_by_user_id)
-       VALUES ($1, $2, $3, $4, $5::jsonb, $6) RETURNING id`,
-      [project.organizationId, project.id, input.title, formatCalcNumber(allocated.code, allocated.seq), JSON.stringify(content), input.createdByUserId],
+      `INSERT INTO sheets (organization_id, project_id, title, calc_number, content, created_by_user_id, template_id, template_version)
+       VALUES ($1, $2, $3, $4, $5::jsonb, $6, $7, $8) RETURNING id`,
+      [
+        project.organizationId,
+        project.id,
+        input.title,
+        formatCalcNumber(allocated.code, allocated.seq),
+        JSON.stringify(content),
+        input.createdByUserId,
+        input.template?.id ?? null,
+        input.template?.version ?? null,
+      ],
     );
     return inserted[0]?.id as string;
   });

@@ -1,0 +1,85 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createEvaluator, machineOutput } from '@sheaf/engine';
+import { evaluateWithFrozenMaterials, freezeMaterials, materialIdsOf } from '../src/services/freezeMaterials';
+import { materialsLookupFor } from '../src/services/materials';
+import { createTeam, signedInClient, type Team } from './helpers/fixtures';
+import type { TestClient } from './helpers/TestClient';
+import { startTestServer, type TestServer } from './helpers/testServer';
+
+const hubIron = (sut: string) => ({
+  name: 'Pulley hub iron (demo)',
+  category: 'cast-iron',
+  notes: 'Invented values for tests.',
+  properties: {
+    Sut: { value: sut, basis: 'typical', source: 'Demo foundry test bars, invented' },
+    Suc: { value: '760 MPa', basis: 'typical', source: 'Demo foundry test bars, invented' },
+  },
+});
+
+const content = {
+  format: 'sheaf-sheet' as const,
+  version: 1 as const,
+  title: 'Pulley hub, bore edge',
+  cells: [
+    { id: 's1', kind: 'stress', name: 'S', sx: '-30 MPa', sy: '55 MPa', txy: '20 MPa' },
+    { id: 'c1', kind: 'criterion', name: 'BCM', of: 'S', theory: 'coulomb-mohr', material: 'hub-iron-demo', required: '2' },
+    { id: 'c2', kind: 'criterion', name: 'DE', of: 'S', theory: 'von-mises', material: 'astm-a36' },
+    { id: 'c3', kind: 'criterion', name: 'MM', of: 'S', theory: 'modified-mohr', material: 'hub-iron-demo' },
+    { id: 'c4', kind: 'criterion', name: 'Gone', of: 'S', theory: 'von-mises', material: 'no-such-material' },
+  ],
+};
+
+describe('frozen material values of a revision', () => {
+  let server: TestServer;
+  let team: Team;
+  let engineer: TestClient;
+
+  beforeAll(async () => {
+    server = await startTestServer();
+    team = await createTeam(server.deps.dataSource, 'freeze');
+    engineer = await signedInClient(server, team.users.engineer);
+    const made = await engineer.post(`/api/orgs/${team.organizationId}/materials`, { id: 'hub-iron-demo', ...hubIron('210 MPa') });
+    expect(made.status).toBe(201);
+  });
+  afterAll(async () => {
+    await server?.close();
+  });
+
+  it('names each material a sheet uses once', () => {
+    expect(materialIdsOf(content)).toEqual(['hub-iron-demo', 'astm-a36', 'no-such-material']);
+  });
+
+  it('freezes values with basis and source, leaving out ids the library does not hold', async () => {
+    const frozen = await freezeMaterials(server.deps.dataSource, content, team.organizationId);
+    expect(Object.keys(frozen).sort()).toEqual(['astm-a36', 'hub-iron-demo']);
+    expect(frozen['hub-iron-demo']?.properties.Sut).toEqual({ value: '210 MPa', basis: 'typical', source: 'Demo foundry test bars, invented' });
+    expect(frozen['astm-a36']?.properties.Sy?.basis).toBe('minimum');
+    expect(frozen['astm-a36']?.builtin).toBe(true);
+  });
+
+  it('a revision’s frozen material values survive an edit of the library', async () => {
+    const frozen = await freezeMaterials(server.deps.dataSource, content, team.organizationId);
+    // As stored with a revision: through JSON and back.
+    const stored = JSON.parse(JSON.stringify(frozen));
+    const atIssue = evaluateWithFrozenMaterials(content, stored);
+    expect(atIssue.cells.BCM?.values?.factor).toEqual(expect.any(Number));
+    expect(atIssue.cells.Gone?.error?.code).toBe('unknown-material');
+
+    const edit = await engineer.request('PUT', `/api/orgs/${team.organizationId}/materials/hub-iron-demo`, { body: hubIron('150 MPa') });
+    expect(edit.status).toBe(200);
+
+    const later = evaluateWithFrozenMaterials(content, stored);
+    expect(later).toEqual(atIssue);
+
+    // The live library has moved on: evaluating with it gives other numbers.
+    const live = createEvaluator(content, { materials: await materialsLookupFor(server.deps.dataSource, team.organizationId) });
+    const liveOutput = machineOutput(live.cells, live.results);
+    expect(liveOutput.cells.BCM?.values?.factor).not.toBeCloseTo(atIssue.cells.BCM?.values?.factor as number, 3);
+    // Brittle Coulomb-Mohr in the fourth quadrant: 1/n = sA/Sut - sB/Suc (Shigley 9th ed., eq. 5-31, from memory).
+    const centre = (-30 + 55) / 2;
+    const radius = Math.hypot((-30 - 55) / 2, 20);
+    const [sA, sB] = [centre + radius, centre - radius];
+    expect(atIssue.cells.BCM?.values?.factor).toBeCloseTo(1 / (sA / 210 - sB / 760), 9);
+    expect(liveOutput.cells.BCM?.values?.factor).toBeCloseTo(1 / (sA / 150 - sB / 760), 9);
+  });
+});
