@@ -57,6 +57,8 @@ export async function startServer(config: Config, overrides: ResourceOverrides =
   const app = createApp(deps);
   server.on('request', app);
   const upgrades = attachUpgradeHandlers(server);
+  // Routes that read or lock a sheet's live document reach the co-editing server through the app.
+  app.locals.collab = upgrades.collab;
 
   let closing: Promise<void> | undefined;
   return {

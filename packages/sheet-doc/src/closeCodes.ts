@@ -18,6 +18,12 @@ export const COLLAB_CLOSE = {
   unavailable: 4500,
   /** The server is shutting down or restarting: reconnect with backoff. */
   shuttingDown: 4503,
+  /**
+   * The sheet's status changed (submitted for check, returned, reassigned): reconnect, and the new
+   * connection is read-only or writable as the status now allows. Unsaved local edits made on a
+   * sheet that went into check are not stored; the editor should reload the sheet.
+   */
+  statusChanged: 4509,
 } as const;
 
 export type CollabCloseCode = (typeof COLLAB_CLOSE)[keyof typeof COLLAB_CLOSE];
@@ -30,6 +36,7 @@ export const COLLAB_CLOSE_REASON: Readonly<Record<CollabCloseCode, string>> = {
   [COLLAB_CLOSE.notFound]: 'sheet not found',
   [COLLAB_CLOSE.unavailable]: 'sheet unavailable, try again later',
   [COLLAB_CLOSE.shuttingDown]: 'server shutting down',
+  [COLLAB_CLOSE.statusChanged]: 'sheet status changed, reconnect',
 };
 
 /** True when the client should stop reconnecting after the server closed with `code`. */

@@ -118,6 +118,17 @@ export class CollabServer {
     }
   }
 
+  /**
+   * Tell an open room that its sheet went into check (`locked`) or came out of it: while locked,
+   * every connection is read-only. Resolves once edits queued before the lock are stored. A sheet
+   * without an open room needs nothing: a room reads the status when it loads, and the log
+   * refuses edits for a sheet in check in any case.
+   */
+  async setSheetLocked(sheetId: string, locked: boolean): Promise<void> {
+    const room = await this.loadedRoom(sheetId);
+    if (room !== undefined) await room.setLocked(locked);
+  }
+
   /** Complete the websocket handshake for an authorized request and put the socket in the sheet's room. */
   accept(request: IncomingMessage, socket: Duplex, head: Buffer, sheetId: string, identity: ConnectionIdentity): void {
     this.websockets.handleUpgrade(request, socket, head, (websocket) => {

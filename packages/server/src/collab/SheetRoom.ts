@@ -15,7 +15,7 @@ import { stampAwarenessEntries } from './awarenessUser';
 import { COLLAB_CLOSE, COLLAB_CLOSE_REASON, type CollabCloseCode } from './closeCodes';
 import { sheetMeta } from './sheetDoc';
 import type { CollabLogger, CollabMetrics } from './collabMetrics';
-import type { LoggedUpdate, RoomPersistence } from './roomPersistence';
+import { SheetLockedError, type LoggedUpdate, type RoomPersistence, type SheetLockState } from './roomPersistence';
 import { StoreThenApplyQueue } from './StoreThenApplyQueue';
 import {
   awarenessMessage,
@@ -27,7 +27,10 @@ import {
   updateMessage,
 } from './messages';
 
-/** Who a connection belongs to and whether it may change the document. */
+/**
+ * Who a connection belongs to and whether their role lets them change the document. While the
+ * sheet is in check the room treats every connection as read-only, whatever this says.
+ */
 export interface ConnectionIdentity {
   user: AwarenessUser;
   writable: boolean;
@@ -55,6 +58,8 @@ interface Connection {
 interface QueuedUpdate extends LoggedUpdate {
   /** The connection it came from; null for an edit made by the server itself. */
   origin: Connection | null;
+  /** Set when the log refused it because the sheet went into check meanwhile. */
+  refused?: boolean;
 }
 /** Awareness client ids one connection may hold (a tab holds one; a reload briefly two). */
 const MAX_CLIENT_IDS_PER_CONNECTION = 4;
@@ -71,17 +76,27 @@ export class SheetRoom {
   private idleTimer: NodeJS.Timeout | null = null;
   private destroyed = false;
   private gone = false;
+  /** In check: nobody writes, whatever their role. */
+  private locked: boolean;
 
   private constructor(
     readonly sheetId: string,
     state: Uint8Array,
     logRows: number,
+    lock: SheetLockState,
     private readonly options: RoomOptions,
   ) {
     this.doc = new Y.Doc();
     Y.applyUpdate(this.doc, state);
     this.logRowsSinceCompaction = logRows;
-    this.queue = new StoreThenApplyQueue<QueuedUpdate>(sheetId, options, (batch) => this.applyStored(batch), () => this.closeAsGone());
+    this.locked = lock === 'in-check';
+    this.queue = new StoreThenApplyQueue<QueuedUpdate>(
+      sheetId,
+      options,
+      (batch) => this.applyStored(batch),
+      () => this.closeAsGone(),
+      (batch) => this.refuseLocked(batch),
+    );
     this.awareness = new awarenessProtocol.Awareness(this.doc);
     // The server has no presence of its own.
     this.awareness.setLocalState(null);
@@ -91,14 +106,35 @@ export class SheetRoom {
 
   /** Load the sheet from the database and open a room for it. */
   static async open(sheetId: string, options: RoomOptions): Promise<SheetRoom> {
-    const { state, logRows, title } = await options.persistence.load(sheetId);
-    const room = new SheetRoom(sheetId, state, logRows, options);
+    const { state, logRows, title, lock } = await options.persistence.load(sheetId);
+    const room = new SheetRoom(sheetId, state, logRows, lock, options);
     room.followStoredTitle(title);
     return room;
   }
 
   get connectionCount(): number {
     return this.connections.size;
+  }
+
+  /** True while the sheet is in check and every connection is read-only. */
+  get isLocked(): boolean {
+    return this.locked;
+  }
+
+  /**
+   * Lock the room for a check (every connection read-only) or unlock it when the checker returns
+   * the sheet. Writers' connections are closed with `statusChanged`, so their editors reconnect
+   * and learn the new status; updates already queued are stored first (they were made before).
+   */
+  async setLocked(locked: boolean): Promise<void> {
+    if (this.locked === locked) return;
+    if (locked) await this.flush();
+    this.locked = locked;
+    for (const connection of this.connections.values()) {
+      if (connection.identity.writable) {
+        connection.socket.close(COLLAB_CLOSE.statusChanged, COLLAB_CLOSE_REASON[COLLAB_CLOSE.statusChanged]);
+      }
+    }
   }
 
   /** True while updates wait to be stored or a compaction runs. */
@@ -117,8 +153,8 @@ export class SheetRoom {
     socket.on('message', (data: WebSocket.RawData) => this.handleMessage(connection, rawDataBytes(data)));
     socket.on('close', () => this.removeConnection(connection));
     // Ask a writer for what it has that the room lacks (offline edits). A read-only client is not
-    // asked: its answer would be dropped anyway.
-    if (identity.writable) this.send(connection, syncStep1Message(this.doc));
+    // asked (nor anyone while the sheet is in check): its answer would be dropped anyway.
+    if (identity.writable && !this.locked) this.send(connection, syncStep1Message(this.doc));
     const present = [...this.awareness.getStates().keys()];
     if (present.length > 0) this.send(connection, awarenessMessage(this.awareness, present));
     for (const data of earlier) this.handleMessage(connection, data);
@@ -141,14 +177,16 @@ export class SheetRoom {
    */
   async applyServerEdit(edit: (doc: Y.Doc) => void, userId: string | null): Promise<void> {
     if (this.destroyed) throw new Error(`applyServerEdit: the room of sheet ${this.sheetId} is closed`);
+    if (this.locked) throw new SheetLockedError(this.sheetId);
     const copy = new Y.Doc();
     Y.applyUpdate(copy, Y.encodeStateAsUpdate(this.doc));
     const before = Y.encodeStateVector(copy);
     edit(copy);
     const update = Y.encodeStateAsUpdate(copy, before);
     copy.destroy();
-    this.enqueue(update, null, userId);
+    const entry = this.enqueue(update, null, userId);
     await this.flush();
+    if (entry?.refused) throw new SheetLockedError(this.sheetId);
   }
 
   /** Compact now, unless nothing was logged since the last compaction; resolves when done. */
@@ -180,7 +218,7 @@ export class SheetRoom {
           return;
         case 'sync-step-2':
         case 'update':
-          if (!connection.identity.writable) {
+          if (!connection.identity.writable || this.locked) {
             this.options.metrics.readOnlyUpdatesDropped++;
             return;
           }
@@ -207,11 +245,13 @@ export class SheetRoom {
    * first, so a reconnecting client's sync step 2 logs only what is new. Throws on an update
    * that does not decode: it must never reach the log, or every later load would fail on it.
    */
-  private enqueue(received: Uint8Array, origin: Connection | null, userId: string | null): void {
+  private enqueue(received: Uint8Array, origin: Connection | null, userId: string | null): QueuedUpdate | null {
     const update = Y.diffUpdate(received, Y.encodeStateVector(this.doc));
     const decoded = Y.decodeUpdate(update);
-    if (decoded.structs.length === 0 && decoded.ds.clients.size === 0) return;
-    this.queue.push({ update, origin, userId });
+    if (decoded.structs.length === 0 && decoded.ds.clients.size === 0) return null;
+    const entry: QueuedUpdate = { update, origin, userId };
+    this.queue.push(entry);
+    return entry;
   }
 
   /** Stored: now the room may apply them, which relays each to every other connection. */
@@ -219,6 +259,22 @@ export class SheetRoom {
     for (const { update, origin } of batch) this.apply(update, origin);
     this.logRowsSinceCompaction += batch.length;
     this.scheduleCompaction();
+  }
+
+  /**
+   * The log refused updates because the sheet went into check before they were stored (a
+   * submission that raced them): they were never applied or relayed. Their senders reconnect
+   * read-only and should reload.
+   */
+  private refuseLocked(batch: readonly QueuedUpdate[]): void {
+    this.locked = true;
+    this.options.metrics.readOnlyUpdatesDropped += batch.length;
+    this.options.logger.warn({ sheetId: this.sheetId, updates: batch.length }, 'dropped edits that arrived after the sheet went into check');
+    for (const entry of batch) {
+      entry.refused = true;
+      const socket = entry.origin?.socket;
+      if (socket !== undefined) socket.close(COLLAB_CLOSE.statusChanged, COLLAB_CLOSE_REASON[COLLAB_CLOSE.statusChanged]);
+    }
   }
 
   /** The sheet was deleted while open: everyone is told it is gone. */

@@ -5,7 +5,7 @@
  * behind it waits too, so nothing unsaved ever leaves the server.
  */
 import type { CollabLogger, CollabMetrics } from './collabMetrics';
-import { SheetGoneError, type LoggedUpdate, type RoomPersistence } from './roomPersistence';
+import { SheetGoneError, SheetLockedError, type LoggedUpdate, type RoomPersistence } from './roomPersistence';
 
 /** Updates stored per INSERT at most, so one statement stays small under a burst. */
 const MAX_BATCH = 200;
@@ -26,12 +26,15 @@ export class StoreThenApplyQueue<Entry extends LoggedUpdate> {
   /**
    * @param applyStored receives each stored batch, in order
    * @param onGone runs once if the sheet turns out to be deleted; the queue then drops everything
+   * @param onRefused receives a batch the log refused because the sheet is in check: it was
+   *   neither stored nor applied, so nobody else ever saw it
    */
   constructor(
     private readonly sheetId: string,
     private readonly options: StoreThenApplyOptions,
     private readonly applyStored: (batch: readonly Entry[]) => void,
     private readonly onGone: () => void,
+    private readonly onRefused: (batch: readonly Entry[]) => void = () => undefined,
   ) {}
 
   /** True while updates wait to be stored. */
@@ -65,6 +68,10 @@ export class StoreThenApplyQueue<Entry extends LoggedUpdate> {
       try {
         await this.storeWithRetry(batch);
       } catch (error) {
+        if (error instanceof SheetLockedError) {
+          this.onRefused(batch);
+          continue;
+        }
         if (!(error instanceof SheetGoneError)) throw error;
         // Deleted while open: its edits have nowhere to go.
         this.gone = true;
@@ -85,7 +92,7 @@ export class StoreThenApplyQueue<Entry extends LoggedUpdate> {
         if (attempt > 1) this.options.logger.info({ sheetId: this.sheetId, attempt }, 'stored the waiting updates');
         return;
       } catch (error) {
-        if (error instanceof SheetGoneError) throw error;
+        if (error instanceof SheetGoneError || error instanceof SheetLockedError) throw error;
         this.options.metrics.storeFailures++;
         const delayMs = Math.min(this.options.maxStoreRetryDelayMs, 50 * 2 ** Math.min(attempt, 16));
         this.options.logger.error(

@@ -6,7 +6,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import * as Y from 'yjs';
 import type { CollabLogger } from './collabMetrics';
-import { SheetGoneError, type LoggedUpdate, type RoomPersistence } from './roomPersistence';
+import { SheetGoneError, SheetLockedError, type LoggedUpdate, type RoomPersistence, type SheetLockState } from './roomPersistence';
 import { docFromSheetContent, sheetContentFromDoc, type SheetFileContent } from './sheetDoc';
 
 /** PostgreSQL's code for a foreign-key violation: the log row's sheet is gone. */
@@ -22,7 +22,34 @@ interface StoredSheet {
   yjs_state: Buffer | null;
   content: SheetFileContent;
   title: string;
+  status: string;
 }
+
+/**
+ * The append, in one statement so the status check and the insert cannot be split by a
+ * submission: nothing is stored while the sheet is in check; the first update stored for an
+ * approved sheet sends it back to draft for its next revision, with an audit event naming who.
+ */
+const APPEND_UPDATES = `
+  WITH target AS (
+    SELECT status FROM sheets WHERE id = $1
+  ), stored AS (
+    INSERT INTO sheet_updates (sheet_id, update, user_id)
+    SELECT $1, entry.update, entry.user_id FROM unnest($2::bytea[], $3::uuid[]) AS entry(update, user_id)
+    WHERE NOT EXISTS (SELECT 1 FROM target WHERE status = 'in-check')
+    RETURNING 1
+  ), reopened AS (
+    UPDATE sheets SET status = 'draft', updated_at = now()
+    WHERE id = $1 AND status = 'approved'
+    RETURNING id, organization_id, revision
+  ), audited AS (
+    INSERT INTO audit_events (action, actor_user_id, organization_id, subject, details)
+    SELECT 'sheet.reopened', $4::uuid, organization_id, id::text,
+           jsonb_build_object('sheetId', id, 'from', 'approved', 'to', 'draft', 'revision', revision + 1)
+    FROM reopened
+    RETURNING 1
+  )
+  SELECT (SELECT count(*) FROM stored)::int AS stored`;
 
 export class PostgresSheetPersistence implements RoomPersistence {
   constructor(
@@ -35,7 +62,7 @@ export class PostgresSheetPersistence implements RoomPersistence {
    * cannot fold and delete rows between the two reads. A sheet never co-edited before gets its
    * state built from `content` and stored first.
    */
-  async load(sheetId: string): Promise<{ state: Uint8Array; logRows: number; title: string }> {
+  async load(sheetId: string): Promise<{ state: Uint8Array; logRows: number; title: string; lock: SheetLockState }> {
     return this.dataSource.transaction(async (manager) => {
       await manager.query(LOCK_SHEET, [sheetId]);
       const sheet = await this.readSheet(manager, sheetId);
@@ -51,23 +78,26 @@ export class PostgresSheetPersistence implements RoomPersistence {
       const doc = this.docFromStored(sheetId, sheet, rows.map((row) => row.update));
       const state = Y.encodeStateAsUpdate(doc);
       doc.destroy();
-      return { state, logRows: rows.length, title: sheet.title };
+      return { state, logRows: rows.length, title: sheet.title, lock: sheet.status === 'in-check' ? 'in-check' : 'editable' };
     });
   }
 
-  /** One INSERT for the whole batch; resolves once committed. */
+  /** One INSERT for the whole batch; resolves once committed. See APPEND_UPDATES for the status rules. */
   async append(sheetId: string, updates: readonly LoggedUpdate[]): Promise<void> {
     if (updates.length === 0) return;
+    let rows: Array<{ stored: number }>;
     try {
-      await this.dataSource.query(
-        `INSERT INTO sheet_updates (sheet_id, update, user_id)
-         SELECT $1, entry.update, entry.user_id FROM unnest($2::bytea[], $3::uuid[]) AS entry(update, user_id)`,
-        [sheetId, updates.map(({ update }) => asBuffer(update)), updates.map(({ userId }) => userId)],
-      );
+      rows = await this.dataSource.query(APPEND_UPDATES, [
+        sheetId,
+        updates.map(({ update }) => asBuffer(update)),
+        updates.map(({ userId }) => userId),
+        updates.find(({ userId }) => userId !== null)?.userId ?? null,
+      ]);
     } catch (error) {
       if (isForeignKeyViolation(error)) throw new SheetGoneError(sheetId);
       throw error;
     }
+    if ((rows[0]?.stored ?? 0) === 0) throw new SheetLockedError(sheetId);
   }
 
   /**
@@ -112,7 +142,7 @@ export class PostgresSheetPersistence implements RoomPersistence {
   }
 
   private async readSheet(manager: EntityManager, sheetId: string): Promise<StoredSheet> {
-    const rows: StoredSheet[] = await manager.query(`SELECT yjs_state, content, title FROM sheets WHERE id = $1 FOR UPDATE`, [
+    const rows: StoredSheet[] = await manager.query(`SELECT yjs_state, content, title, status FROM sheets WHERE id = $1 FOR UPDATE`, [
       sheetId,
     ]);
     const sheet = rows[0];

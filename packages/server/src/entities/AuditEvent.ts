@@ -11,7 +11,15 @@ export type AuditAction =
   | 'member.role-changed'
   | 'member.removed'
   | 'invitation.sent'
-  | 'invitation.accepted';
+  | 'invitation.accepted'
+  | 'sheet.submitted'
+  | 'sheet.returned'
+  | 'sheet.approved'
+  | 'sheet.checker-reassigned'
+  | 'sheet.reopened'
+  | 'note.created'
+  | 'note.resolved'
+  | 'note.reopened';
 
 /** An append-only record of a security-relevant event: who, what, where from, when. */
 @Entity({ name: 'audit_events' })

@@ -9,11 +9,13 @@ const ROLE_WORDS: Record<Role, string> = {
   viewer: 'a viewer (reads sheets and their revisions)',
 };
 
-const CAUTION =
+/** The engineering caution every message ends with. */
+export const CAUTION =
   'Sheaf supports the judgement of a qualified engineer; it does not replace it. Verify results against the ' +
   'governing codes; approval of a calculation rests with licensed practice.';
 
-function htmlMail(heading: string, paragraphs: string[], link: { href: string; label: string }, footer: string): string {
+/** A message's HTML part: heading, paragraphs, one button-like link and a footer. */
+export function htmlMail(heading: string, paragraphs: string[], link: { href: string; label: string }, footer: string): string {
   const body = paragraphs.map((p) => `<p style="margin:0 0 12px">${escapeHtml(p)}</p>`).join('');
   return `<!doctype html><html><body style="margin:0;background:#ece8de;font:15px/1.5 sans-serif;color:#1d1f22">
 <div style="max-width:560px;margin:24px auto;background:#fbf8f1;padding:24px;border:1px solid #d6d0c2">

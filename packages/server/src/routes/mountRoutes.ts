@@ -11,6 +11,8 @@ const PARAM_NAMES: Record<string, string> = {
   userId: 'member',
   projectId: 'project',
   sheetId: 'sheet',
+  noteId: 'note',
+  number: 'revision',
   token: 'invitation',
   templateId: 'template',
   materialKey: 'material',

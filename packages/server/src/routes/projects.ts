@@ -132,7 +132,9 @@ export function projectAndSheetRoutes(): Route[] {
       params: z.object({ sheetId: Id }),
       body: UpdateSheetRequest,
       response: { status: 200, description: 'The updated sheet', schema: SheetResponse },
-      handler: async ({ deps, access, body }) => ok({ sheet: await updateSheet(deps.dataSource, grantedSheet(access), body) }),
+      errors: [409],
+      handler: async ({ deps, user, access, body }) =>
+        ok({ sheet: await updateSheet(deps.dataSource, grantedSheet(access), body, user?.id ?? null) }),
     }),
     defineRoute({
       id: 'sheets.delete',
@@ -143,6 +145,7 @@ export function projectAndSheetRoutes(): Route[] {
       access: { kind: 'permission', action: 'sheet.delete', resolve: sheetFromParams },
       params: z.object({ sheetId: Id }),
       response: { status: 204, description: 'Deleted' },
+      errors: [409],
       handler: async ({ deps, access }) => {
         await deleteSheet(deps.dataSource, grantedSheet(access).id);
         return noContent();
