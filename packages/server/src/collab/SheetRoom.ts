@@ -17,6 +17,7 @@ import { sheetMeta } from './sheetDoc';
 import type { CollabLogger, CollabMetrics } from './collabMetrics';
 import { SheetLockedError, type LoggedUpdate, type RoomPersistence, type SheetLockState } from './roomPersistence';
 import { StoreThenApplyQueue } from './StoreThenApplyQueue';
+import { changesNothing } from './updateNovelty';
 import {
   awarenessMessage,
   decodeAwarenessUpdate,
@@ -247,8 +248,7 @@ export class SheetRoom {
    */
   private enqueue(received: Uint8Array, origin: Connection | null, userId: string | null): QueuedUpdate | null {
     const update = Y.diffUpdate(received, Y.encodeStateVector(this.doc));
-    const decoded = Y.decodeUpdate(update);
-    if (decoded.structs.length === 0 && decoded.ds.clients.size === 0) return null;
+    if (changesNothing(this.doc, update)) return null;
     const entry: QueuedUpdate = { update, origin, userId };
     this.queue.push(entry);
     return entry;
