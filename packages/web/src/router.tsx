@@ -104,6 +104,35 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                     import('./routes/SheetPage').then((m) => ({ Component: m.SheetPage })),
                 },
                 {
+                  path: 'sheets/:sheetId/save-as-template',
+                  lazy: () =>
+                    import('./routes/SaveAsTemplatePage').then((m) => ({
+                      Component: m.SaveAsTemplatePage,
+                    })),
+                },
+                {
+                  path: 'templates',
+                  lazy: () =>
+                    import('./routes/TemplatesPage').then((m) => ({ Component: m.TemplatesPage })),
+                },
+                {
+                  path: 'templates/:templateId',
+                  lazy: () =>
+                    import('./routes/TemplatePage').then((m) => ({ Component: m.TemplatePage })),
+                },
+                {
+                  path: 'templates/:templateId/new',
+                  lazy: () =>
+                    import('./routes/NewSheetFromTemplatePage').then((m) => ({
+                      Component: m.NewSheetFromTemplatePage,
+                    })),
+                },
+                {
+                  path: 'materials',
+                  lazy: () =>
+                    import('./routes/MaterialsPage').then((m) => ({ Component: m.MaterialsPage })),
+                },
+                {
                   path: 'projects',
                   lazy: () =>
                     import('./routes/ProjectsPage').then((m) => ({ Component: m.ProjectsPage })),

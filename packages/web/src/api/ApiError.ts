@@ -6,17 +6,28 @@
  * message reads `field: problem; other.field: problem`; `fieldErrors` holds those problems by
  * field path so a form can show each beside its input.
  */
+/** One of several problems of a request: the field, and for a file its row and column. */
+export interface ApiErrorDetail {
+  field: string;
+  row?: number;
+  column?: string;
+  message: string;
+}
+
 export class ApiError extends Error {
   override readonly name = 'ApiError';
   readonly status: number;
   readonly code: string;
   readonly fieldErrors: Readonly<Record<string, string>>;
+  /** Each problem when the server listed several (the bad rows of an uploaded CSV file). */
+  readonly details: readonly ApiErrorDetail[];
 
-  constructor(status: number, code: string, message: string) {
+  constructor(status: number, code: string, message: string, details: readonly ApiErrorDetail[] = []) {
     super(message);
     this.status = status;
     this.code = code;
     this.fieldErrors = code === 'invalid-field' ? parseFieldProblems(message) : {};
+    this.details = details;
   }
 
   /** The first field the server named, if any. */

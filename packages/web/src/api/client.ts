@@ -116,7 +116,15 @@ function errorFromResponse(response: Response, json: unknown): ApiError {
     typeof body?.message === 'string' && body.message !== ''
       ? body.message
       : `The server answered ${response.status}${response.statusText ? ` ${response.statusText}` : ''}.`;
-  return new ApiError(response.status, code, message);
+  const details = Array.isArray(body?.details)
+    ? body.details.filter(isRecord).map((d) => ({
+        field: typeof d.field === 'string' ? d.field : '',
+        row: typeof d.row === 'number' ? d.row : undefined,
+        column: typeof d.column === 'string' ? d.column : undefined,
+        message: typeof d.message === 'string' ? d.message : '',
+      }))
+    : [];
+  return new ApiError(response.status, code, message, details);
 }
 
 function isRecord(value: unknown): value is Record<string, unknown> {

@@ -3,6 +3,8 @@ import { NavLink } from 'react-router-dom';
 const LINKS = [
   { to: '/sheets', label: 'Sheets' },
   { to: '/projects', label: 'Projects' },
+  { to: '/templates', label: 'Templates' },
+  { to: '/materials', label: 'Materials' },
   { to: '/members', label: 'Members' },
   { to: '/profile', label: 'Profile' },
 ] as const;

@@ -4,6 +4,7 @@ import { Loading } from '../components/Loading';
 import { Paper } from '../components/Paper';
 import { RawCellList } from '../components/RawCellList';
 import { TitleBlock } from '../components/TitleBlock';
+import { SheetTemplateBar } from '../features/templates/SheetTemplateBar';
 import { useProjectOrganization } from '../hooks/useProjectOrganization';
 import { useDocumentTitle } from '../hooks/useDocumentTitle';
 
@@ -31,6 +32,7 @@ export function SheetPage() {
   return (
     <Paper className="mx-auto max-w-[60rem]">
       <TitleBlock sheet={sheet} organizationName={organizationName} />
+      <SheetTemplateBar sheet={sheet} role={query.data.role} />
       <section aria-labelledby="cells-heading">
         <div className="mb-2 flex items-baseline justify-between gap-3">
           <h2 id="cells-heading" className="text-[1rem]">
