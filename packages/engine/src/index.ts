@@ -123,6 +123,7 @@ export { diffRevisions } from './diff/diffRevisions';
 export { diffCells, inputChanges } from './diff/diffCells';
 export type { CellDiff } from './diff/diffCells';
 export { diffResults } from './diff/diffResults';
+export { machineCellsById } from './diff/machineCellsById';
 export type { DiffResultsOptions } from './diff/diffResults';
 export type {
   ChangedCell,

@@ -4,7 +4,8 @@ import type { Measure } from '../units/measure';
 import { isUnitSystemId, type UnitSystemId } from '../units/unitSystems';
 import { createEvaluator } from '../sheet/createEvaluator';
 import { formatResult } from '../sheet/formatResult';
-import type { MachineCell, MachineOutput } from '../sheet/machineOutput';
+import type { MachineCell } from '../sheet/machineOutput';
+import { machineCellsById } from './machineCellsById';
 import type { DiffValue, ResultChange, RevisionSnapshot, Verdict, VerdictCrossing } from './types';
 
 type Cells = RevisionSnapshot['content']['cells'];
@@ -41,8 +42,8 @@ export function diffResults(
 ): { results: ResultChange[]; crossings: VerdictCrossing[] } {
   const system = options.unitSystem ?? unitSystemOf(newer) ?? 'SI';
   const tolerance = options.tolerance ?? 1e-12;
-  const oldResults = resultsById(older.content.cells, older.results);
-  const newResults = resultsById(newer.content.cells, newer.results);
+  const oldResults = machineCellsById(older.content.cells, older.results);
+  const newResults = machineCellsById(newer.content.cells, newer.results);
   const oldMeasures = measuresById(older.content.cells, options.materials);
   const newMeasures = measuresById(newer.content.cells, options.materials);
 
@@ -89,23 +90,6 @@ export function diffResults(
 function unitSystemOf(snapshot: RevisionSnapshot): UnitSystemId | undefined {
   const system = snapshot.content.unitSystem;
   return typeof system === 'string' && isUnitSystemId(system) ? system : undefined;
-}
-
-/**
- * Machine output is keyed by cell name (`name@id` for a repeated name); this maps it back to
- * cell ids with the same rule, walking the cells in order.
- */
-function resultsById(cells: Cells, output: MachineOutput): Map<string, MachineCell> {
-  const byId = new Map<string, MachineCell>();
-  const seen = new Set<string>();
-  for (const cell of cells) {
-    if (typeof cell.name !== 'string') continue;
-    const key = seen.has(cell.name) ? `${cell.name}@${cell.id}` : cell.name;
-    seen.add(cell.name);
-    const result = output.cells[key];
-    if (result !== undefined) byId.set(cell.id, result);
-  }
-  return byId;
 }
 
 function measuresById(cells: Cells, materials: MaterialsLookup | undefined): Map<string, Readonly<Record<string, Measure>>> {
