@@ -104,6 +104,23 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                     import('./routes/SheetPage').then((m) => ({ Component: m.SheetPage })),
                 },
                 {
+                  path: 'sheets/:sheetId/revisions',
+                  lazy: () =>
+                    import('./routes/RevisionsPage').then((m) => ({ Component: m.RevisionsPage })),
+                },
+                {
+                  path: 'sheets/:sheetId/revisions/:number',
+                  lazy: () =>
+                    import('./routes/RevisionPage').then((m) => ({ Component: m.RevisionPage })),
+                },
+                {
+                  path: 'sheets/:sheetId/history',
+                  lazy: () =>
+                    import('./routes/SheetHistoryPage').then((m) => ({
+                      Component: m.SheetHistoryPage,
+                    })),
+                },
+                {
                   path: 'sheets/:sheetId/save-as-template',
                   lazy: () =>
                     import('./routes/SaveAsTemplatePage').then((m) => ({
