@@ -67,7 +67,13 @@ const demo = JSON.parse(
 );
 
 step('starting the server');
-const server = spawn(TSX, ['src/index.ts'], { cwd: SERVER_DIR, env, stdio: 'inherit' });
+// node --import tsx (not the tsx wrapper) makes the server a direct child, and the IPC channel
+// lets it notice when this process dies.
+const server = spawn(process.execPath, ['--import', 'tsx', 'src/index.ts'], {
+  cwd: SERVER_DIR,
+  env,
+  stdio: ['inherit', 'inherit', 'inherit', 'ipc'],
+});
 let stopping = false;
 
 waitForHealth().then((ok) => {

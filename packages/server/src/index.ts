@@ -40,6 +40,9 @@ async function main(): Promise<void> {
   };
   process.on('SIGTERM', stop);
   process.on('SIGINT', stop);
+  // Started by `npm start` with an IPC channel: if that process dies (even by kill -9), the
+  // channel closes and the server stops too, so no orphan keeps the port or the database busy.
+  if (process.send) process.on('disconnect', () => stop('SIGTERM'));
 }
 
 main().catch((error: unknown) => {
