@@ -93,7 +93,7 @@ describe('templates', () => {
     });
     expect(res.status).toBe(400);
     expect(res.body.error.details.map((d: { field: string }) => d.field)).toEqual(['body.parameters.q', 'body.parameters.p', 'body.parameters.t']);
-    expect(res.body.error.message).toMatch(/body\.parameters\.p: expected a stress/);
+    expect(res.body.error.message).toMatch(/body\.parameters\.p: Internal pressure: expected a stress/);
     expect(res.body.error.message).toMatch(/body\.parameters\.t: Wall thickness must be at most 8 mm \(got 9 mm\)/);
     expect((await viewer.get(`/api/projects/${team.project.id}/sheets`)).body.sheets.length).toBe(before);
   });

@@ -60,9 +60,9 @@ describe('template parameters', () => {
     expect(outcome.ok).toBe(false);
     if (outcome.ok) return;
     expect(outcome.problems.map((p) => p.field)).toEqual(['parameters.F', 'parameters.w', 'parameters.k']);
-    expect(outcome.problems[0]!.message).toBe('parameters.F: expected a force (e.g. 18 kN), got a pressure (stress) (Lug load)');
-    expect(outcome.problems[1]!.message).toBe('parameters.w: expected a length (e.g. 12 mm), got a force (Plate width)');
-    expect(outcome.problems[2]!.message).toBe('parameters.k: expected a plain number, got a length (Dynamic factor)');
+    expect(outcome.problems[0]!.message).toBe('parameters.F: Lug load: expected a force (e.g. 18 kN), got a pressure (stress)');
+    expect(outcome.problems[1]!.message).toBe('parameters.w: Plate width: expected a length (e.g. 12 mm), got a force');
+    expect(outcome.problems[2]!.message).toBe('parameters.k: Dynamic factor: expected a plain number, got a length');
   });
 
   it('report missing values, bad expressions and names that are not parameters, all at once', () => {

@@ -173,7 +173,7 @@ export function applyTemplateParameters<S extends ParameterisedSheet>(
       continue;
     }
     const wrong = dimensionProblem(field, value.dim, unit.dim, p.unit);
-    if (wrong) problems.push({ field, message: `${wrong} (${p.label})` });
+    if (wrong) problems.push({ field, message: `${field}: ${p.label}: ${wrong.slice(field.length + 2)}` });
     else good.set(p.name, { si: value.si, unit });
   }
   const names = new Set(parameters.map((p) => p.name));

@@ -58,7 +58,7 @@ function NewSheet({ membership }: { membership: Membership }) {
           A sheet belongs to a project. <Link to="/projects" className="underline">Start a project</Link> first.
         </p>
       ) : (
-        <ParameterForm template={t} projects={projects.data} onCreated={(sheet) => navigate(`/sheets/${encodeURIComponent(sheet.id)}`)} />
+        <ParameterForm organizationId={organizationId} template={t} projects={projects.data} onCreated={(sheet) => navigate(`/sheets/${encodeURIComponent(sheet.id)}`)} />
       )}
       <p className="mt-4 text-[0.8125rem] text-ink-muted">
         A template is a starting point: check that its assumptions (first note of the sheet) hold for your case. Results support,

@@ -127,8 +127,8 @@ export function MaterialsTable({
         minimum, <BasisTag basis="typical" /> typical, <BasisTag basis="design" /> design value.
       </p>
       <div className="overflow-x-auto">
-        <table className="ruled text-[0.8125rem]">
-          <caption className="sr-only">Materials library, sortable by each column</caption>
+        <table className="ruled text-[0.8125rem] [&_tbody_td]:border-b-0">
+          <caption className="sr-only">Materials library, sortable by each column; each material's sources under its values</caption>
           <thead>
             <tr>
               <SortHeader label="Material" sortKey="name" sort={sort} onSort={onSort} />
@@ -136,7 +136,6 @@ export function MaterialsTable({
               {VALUE_COLUMNS.map((key) => (
                 <SortHeader key={key} label={<PropertySymbol name={key} />} sortKey={key} sort={sort} onSort={onSort} numeric />
               ))}
-              <th scope="col">Sources</th>
               {actions ? (
                 <th scope="col">
                   <span className="sr-only">Actions</span>
@@ -144,9 +143,9 @@ export function MaterialsTable({
               ) : null}
             </tr>
           </thead>
-          <tbody>
-            {shown.map(({ material: m }) => (
-              <tr key={m.id}>
+          {shown.map(({ material: m }) => (
+            <tbody key={m.id} className="border-b border-paper-line">
+              <tr className="[&>td]:border-b-0">
                 <td className="min-w-[13rem]">
                   <span className="font-medium">{m.name}</span>
                   <span className="block font-mono text-[0.75rem] text-ink-faint">
@@ -172,19 +171,23 @@ export function MaterialsTable({
                     </td>
                   );
                 })}
-                <td className="min-w-[22rem] text-[0.75rem] text-ink-muted">
-                  <ul className="space-y-0.5">
+                {actions ? <td className="whitespace-nowrap">{m.builtin ? null : actions(m)}</td> : null}
+              </tr>
+              <tr className="[&>td]:pt-0">
+                <td colSpan={2 + VALUE_COLUMNS.length + (actions ? 1 : 0)} className="text-[0.75rem] text-ink-muted">
+                  <span className="sr-only">Sources of {m.name}: </span>
+                  <ul className="space-y-0.5 pl-3">
                     {sourceLines(m).map((line) => (
                       <li key={line.source}>
                         <span className="font-mono text-ink">{line.keys.join(', ')}</span>: {line.source}
                       </li>
                     ))}
                   </ul>
+                  {m.notes ? <p className="mt-0.5 pl-3 italic">{m.notes}</p> : null}
                 </td>
-                {actions ? <td className="whitespace-nowrap">{m.builtin ? null : actions(m)}</td> : null}
               </tr>
-            ))}
-          </tbody>
+            </tbody>
+          ))}
         </table>
       </div>
     </div>

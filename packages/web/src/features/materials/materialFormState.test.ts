@@ -24,9 +24,9 @@ describe('material form state', () => {
     const draft = draftOf();
     draft.id = 'Hub Iron';
     draft.name = 'Hub iron';
-    draft.properties.Sut = { value: '210 MPa', basis: 'typical', source: '' };
+    draft.properties.Sut = { value: '210 kN', basis: 'typical', source: '' };
     const first = recordOfDraft(draft);
-    expect('errors' in first && Object.keys(first.errors).sort()).toEqual(['id', 'properties.Sut.source']);
+    expect('errors' in first && Object.keys(first.errors).sort()).toEqual(['id', 'properties.Sut.source', 'properties.Sut.value']);
 
     draft.id = 'hub-iron';
     draft.properties.Sut = { value: '210 kN', basis: 'typical', source: 'Demo test bars' };

@@ -53,10 +53,10 @@ export function recordOfDraft(draft: MaterialDraft): { record: MaterialRecord } 
       const path = issue.path.join('.');
       errors[path] ??= issue.message;
     }
-    return { errors };
   }
-  for (const problem of checkMaterialValues(parsed.data)) {
-    errors[problem.field] ??= problem.message.slice(problem.field.length + 2);
+  // Values are checked even when another field failed, so every problem shows at once.
+  for (const problem of checkMaterialValues({ properties })) {
+    if (problem.field !== 'properties' || parsed.success) errors[problem.field] ??= problem.message.slice(problem.field.length + 2);
   }
-  return Object.keys(errors).length > 0 ? { errors } : { record: parsed.data };
+  return Object.keys(errors).length > 0 || !parsed.success ? { errors } : { record: parsed.data };
 }

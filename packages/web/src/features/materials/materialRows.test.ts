@@ -48,4 +48,13 @@ describe('materials table rows', () => {
       'own-d',
     ]);
   });
+
+  it('sorts categories in the library’s order, steels before aluminium before cast irons', () => {
+    expect(filterAndSortMaterials(rows, all, { key: 'category', direction: 'ascending' }).map((r) => r.material.id)).toEqual([
+      'steel-a',
+      'own-d',
+      'alu-b',
+      'iron-c',
+    ]);
+  });
 });

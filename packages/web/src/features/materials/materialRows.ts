@@ -1,4 +1,4 @@
-import { evaluateExpression, isExpressionProblem, MATERIAL_PROPERTY_KEYS, type MaterialPropertyKey } from '@sheaf/engine';
+import { evaluateExpression, isExpressionProblem, MATERIAL_CATEGORIES, MATERIAL_PROPERTY_KEYS, type MaterialPropertyKey } from '@sheaf/engine';
 import type { LibraryMaterial } from '@sheaf/engine/api';
 
 /** A column the materials table can sort by. */
@@ -44,7 +44,8 @@ function haystack(m: LibraryMaterial): string {
 
 /**
  * Rows that pass the filter, sorted: numbers by their SI value (a material without the value
- * last, whichever the direction), text alphabetically; ties keep the library's order.
+ * last, whichever the direction), names alphabetically, categories in the library's order; ties
+ * keep the library's order.
  */
 export function filterAndSortMaterials(rows: readonly MaterialRow[], filter: MaterialFilter, sort: MaterialSort): MaterialRow[] {
   const words = filter.text.toLowerCase().split(/\s+/).filter(Boolean);
@@ -59,8 +60,12 @@ export function filterAndSortMaterials(rows: readonly MaterialRow[], filter: Mat
   const indexed = kept.map((row, index) => ({ row, index }));
   indexed.sort((a, b) => {
     let order: number;
-    if (sort.key === 'name' || sort.key === 'category') {
-      order = sign * a.row.material[sort.key].localeCompare(b.row.material[sort.key]);
+    if (sort.key === 'category') {
+      // Categories in the library's order (steels first), not alphabetically.
+      const rank = (m: LibraryMaterial) => (MATERIAL_CATEGORIES as readonly string[]).indexOf(m.category);
+      order = sign * (rank(a.row.material) - rank(b.row.material));
+    } else if (sort.key === 'name') {
+      order = sign * a.row.material.name.localeCompare(b.row.material.name);
     } else {
       const [x, y] = [a.row.si[sort.key], b.row.si[sort.key]];
       if (x === undefined || y === undefined) order = x === undefined ? (y === undefined ? 0 : 1) : -1;

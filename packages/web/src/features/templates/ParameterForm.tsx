@@ -7,6 +7,12 @@ import type { Project } from '../../api/types';
 import { FieldError } from '../../components/FieldError';
 import { FormAlert } from '../../components/FormAlert';
 import { checkParameterForm, isClean, rangeText, serverParameterErrors, type ParameterFormErrors } from './parameterForm';
+import { TemplatePreview } from './TemplatePreview';
+
+/** A problem without the parameter's label in front ("Wall thickness must be ..." gives "must be ..."). */
+function withoutLabel(message: string, label: string): string {
+  return message.startsWith(label) ? message.slice(label.length).replace(/^:? /, '') : message;
+}
 
 /**
  * The form that starts a sheet from a template version: a title, the project it goes in, and a
@@ -15,10 +21,12 @@ import { checkParameterForm, isClean, rangeText, serverParameterErrors, type Par
  * the server; each problem is shown beside its field, naming it.
  */
 export function ParameterForm({
+  organizationId,
   template,
   projects,
   onCreated,
 }: {
+  organizationId: string;
   template: TemplateDetail;
   projects: readonly Project[];
   onCreated: (sheet: SheetDetail) => void;
@@ -116,7 +124,7 @@ export function ParameterForm({
                 </div>
                 {error ? (
                   <FieldError id={`${inputId}-help`}>
-                    {p.label} ({p.name}): {error.replace(new RegExp(`^${p.label} `), '')}
+                    {p.label} ({p.name}): {withoutLabel(error, p.label)}
                   </FieldError>
                 ) : (
                   <p id={`${inputId}-help`} className="mt-1 text-[0.75rem] text-ink-muted">
@@ -130,6 +138,13 @@ export function ParameterForm({
           })}
         </div>
       </fieldset>
+
+      <section aria-labelledby={`${formId}-preview`}>
+        <h2 id={`${formId}-preview`} className="mb-1 font-medium">
+          Results with these values
+        </h2>
+        <TemplatePreview organizationId={organizationId} template={template} values={values} />
+      </section>
 
       <p className="text-[0.8125rem] text-ink-muted">
         The sheet records this template and its version (v{template.version}); later versions of the template never change it.

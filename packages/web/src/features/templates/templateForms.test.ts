@@ -29,7 +29,7 @@ describe('the new-sheet parameter form', () => {
     const errors = checkParameterForm(template, { p: '20 kN', r: '60 mm', t: '7' });
     expect(errors.form).toEqual([]);
     expect(errors.byName).toEqual({
-      p: expect.stringMatching(/^expected a stress .* got a force/),
+      p: expect.stringMatching(/^Internal pressure: expected a stress .* got a force/),
       t: 'Wall thickness must be at most 6 mm (got 7 mm)',
     });
     expect(checkParameterForm(template, { p: '20', r: '60 mm', t: '6 mm' })).toEqual({ byName: {}, form: [] });
