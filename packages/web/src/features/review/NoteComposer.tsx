@@ -38,7 +38,7 @@ export function NoteComposer({
     );
   };
   return (
-    <form onSubmit={submit} className="mt-2" aria-label={label}>
+    <form onSubmit={submit} className="mt-2">
       <label htmlFor={id} className="sr-only">
         {label}
       </label>
