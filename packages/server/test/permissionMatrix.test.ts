@@ -130,6 +130,10 @@ const CALLS: Record<string, (ctx: CallContext) => Promise<Call>> = {
     params: { projectId: team.project.id },
     body: { templateId: 'builtin:thin-walled-sphere', title: 'Matrix receiver', parameters: { p: '2 MPa', r: '300 mm', t: '8 mm' } },
   }),
+  'templates.createFromRevision': async ({ server, team }) => ({
+    params: { sheetId: await approvedSheet(server.deps.dataSource, team), number: '1' },
+    body: { title: 'Matrix lug, approved', description: '', category: 'Lifting gear', parameters: [] },
+  }),
   // The check workflow. Per-sheet rules (only the assigned checker, never the preparer) are
   // met by the setup, so the table alone decides each cell of the matrix.
   'review.state': async ({ team }) => ({ params: { sheetId: team.sheet.id } }),

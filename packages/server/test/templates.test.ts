@@ -3,6 +3,7 @@ import { createEvaluator } from '@sheaf/engine';
 import type { SheetDetail, TemplateDetail, TemplateSummary } from '@sheaf/engine/api';
 import { materialsLookupFor } from '../src/services/materials';
 import { createTeam, signedInClient, type Team } from './helpers/fixtures';
+import { approvedSheet } from './helpers/review';
 import type { TestClient } from './helpers/TestClient';
 import { startTestServer, type TestServer } from './helpers/testServer';
 
@@ -204,5 +205,24 @@ describe('templates', () => {
     expect(res.status).toBe(404);
     const make = await outsider.post(`/api/projects/${other.project.id}/sheets/from-template`, { templateId: mine!.id, title: 'x', parameters: {} });
     expect(make.status).toBe(404);
+  });
+
+  it('saves an approved revision as a template, naming the revision it came from', async () => {
+    const sheetId = await approvedSheet(server.deps.dataSource, team);
+    const revision = await viewer.get(`/api/sheets/${sheetId}/revisions/1`);
+    expect(revision.status).toBe(200);
+    const res = await engineer.post(`/api/sheets/${sheetId}/revisions/1/templates`, {
+      title: 'Lug at the weld toe, approved',
+      description: 'From revision 1 as approved.',
+      category: 'Lifting gear',
+      parameters: [],
+    });
+    expect(res.status).toBe(201);
+    const template: TemplateDetail = res.body.template;
+    expect(template.versions[0]).toMatchObject({ version: 1, sourceSheetId: sheetId, sourceRevisionId: expect.any(String) });
+    const revisionCells = revision.body.revision.content.cells.map((c: { id: string }) => c.id);
+    expect(template.content.cells.map((c) => c.id)).toEqual(revisionCells);
+    const missing = await engineer.post(`/api/sheets/${sheetId}/revisions/9/templates`, { title: 'x', description: '', category: 'y', parameters: [] });
+    expect(missing.status).toBe(404);
   });
 });

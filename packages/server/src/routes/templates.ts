@@ -16,6 +16,7 @@ import {
 } from '@sheaf/engine/api';
 import { organizationFromParams, projectFromParams, sheetFromParams, type AccessGrant } from '../auth/permissions';
 import { collabServerOf } from '../collab/upgradeHandlers';
+import { Revision } from '../entities/Revision';
 import { Sheet } from '../entities/Sheet';
 import { notFound } from '../http/ApiError';
 import type { AppDeps } from '../deps';
@@ -97,6 +98,31 @@ export function templateRoutes(): Route[] {
           ...body,
           content: await currentContent(req, sheet),
           sourceSheetId: sheet.id,
+          userId: userOf(user),
+        });
+        return created({ template });
+      },
+    }),
+    defineRoute({
+      id: 'templates.createFromRevision',
+      method: 'post',
+      path: '/api/sheets/:sheetId/revisions/:number/templates',
+      summary: "Save an approved revision's content as a new template of its organization, naming the quantity cells that are parameters",
+      tag: 'templates',
+      access: { kind: 'permission', action: 'template.write', resolve: sheetFromParams },
+      params: z.object({ sheetId: Id, number: z.coerce.number().int().min(1) }),
+      body: CreateTemplateRequest,
+      response: { status: 201, description: 'The new template, version 1', schema: TemplateResponse },
+      handler: async ({ deps, access, params, body, user }) => {
+        const grant = granted(access);
+        const sheet = grant.sheet as Sheet;
+        const revision = await deps.dataSource.getRepository(Revision).findOneBy({ sheetId: sheet.id, number: params.number });
+        if (!revision) throw notFound('revision');
+        const template = await createTemplate(deps.dataSource, grant.organizationId, {
+          ...body,
+          content: checkSheetContent(revision.content, 'revision.content'),
+          sourceSheetId: sheet.id,
+          sourceRevisionId: revision.id,
           userId: userOf(user),
         });
         return created({ template });
