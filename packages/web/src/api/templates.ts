@@ -92,3 +92,16 @@ export function useSaveTemplateVersion(organizationId: string) {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: templateKeys.all }),
   });
 }
+
+/** POST /api/sheets/:sheetId/revisions/:number/templates: an approved revision's content as a new template. */
+export function useSaveRevisionAsTemplate(sheetId: string, revisionNumber: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: CreateTemplateRequest) =>
+      apiRequest<TemplateResponse>(`/api/sheets/${encodeURIComponent(sheetId)}/revisions/${revisionNumber}/templates`, {
+        method: 'POST',
+        body: input,
+      }).then((r): TemplateDetail => r.template),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: templateKeys.all }),
+  });
+}

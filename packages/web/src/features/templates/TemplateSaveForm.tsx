@@ -2,13 +2,14 @@ import { useId, useState, type FormEvent } from 'react';
 import type { TemplateParameter } from '@sheaf/engine';
 import type { SheetContentV1, TemplateDetail, TemplateSummary } from '@sheaf/engine/api';
 import { describeError, isApiError } from '../../api/ApiError';
-import { useSaveSheetAsTemplate, useSaveTemplateVersion } from '../../api/templates';
+import { useSaveRevisionAsTemplate, useSaveSheetAsTemplate, useSaveTemplateVersion } from '../../api/templates';
 import { FieldError } from '../../components/FieldError';
 import { FormAlert } from '../../components/FormAlert';
 import { checkParameterRows, parameterRows, parametersOfRows, type ParameterRow } from './parameterDefinitions';
 
 export type SaveTarget =
   | { kind: 'sheet'; sheetId: string; ownTemplates: readonly TemplateSummary[] }
+  | { kind: 'revision'; sheetId: string; number: number }
   | { kind: 'template'; templateId: string };
 
 export interface TemplateText {
@@ -19,8 +20,8 @@ export interface TemplateText {
 }
 
 /**
- * Save a sheet as a template (a new one, or a new version of one of the organization's), or save
- * a template's new version with new text and parameters. The quantity cells of the content are
+ * Save a sheet as a template (a new one, or a new version of one of the organization's), save an
+ * approved revision as a new template, or save a template's new version with new text and parameters. The quantity cells of the content are
  * listed; ticking one makes it a parameter, with its label, unit and allowed range (expressions
  * with units; they may name other parameters).
  */
@@ -47,9 +48,10 @@ export function TemplateSaveForm({
   const [versionOf, setVersionOf] = useState<string>('');
   const [submitted, setSubmitted] = useState(false);
   const saveNew = useSaveSheetAsTemplate(target.kind === 'sheet' ? target.sheetId : '');
+  const saveRevision = useSaveRevisionAsTemplate(target.kind === 'revision' ? target.sheetId : '', target.kind === 'revision' ? target.number : 0);
   const saveVersion = useSaveTemplateVersion(organizationId);
-  const saving = saveNew.isPending || saveVersion.isPending;
-  const error = saveNew.error ?? saveVersion.error;
+  const saving = saveNew.isPending || saveVersion.isPending || saveRevision.isPending;
+  const error = saveNew.error ?? saveVersion.error ?? saveRevision.error;
 
   const checked = checkParameterRows(content, rows);
   const textErrors = {
@@ -67,7 +69,8 @@ export function TemplateSaveForm({
     if (textErrors.title || textErrors.category || Object.keys(checked.byCell).length > 0 || checked.other.length > 0) return;
     const body = { title: title.trim(), description: description.trim(), category: category.trim(), parameters: parametersOfRows(rows) };
     try {
-      if (target.kind === 'sheet' && versionOf === '') onSaved(await saveNew.mutateAsync(body));
+      if (target.kind === 'revision') onSaved(await saveRevision.mutateAsync(body));
+      else if (target.kind === 'sheet' && versionOf === '') onSaved(await saveNew.mutateAsync(body));
       else if (target.kind === 'sheet') onSaved(await saveVersion.mutateAsync({ ...body, templateId: versionOf, sheetId: target.sheetId }));
       else onSaved(await saveVersion.mutateAsync({ ...body, templateId: target.templateId }));
     } catch {
