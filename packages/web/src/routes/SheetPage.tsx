@@ -1,49 +1,59 @@
+import { useRef } from 'react';
 import { useParams } from 'react-router-dom';
+import { useMe } from '../api/auth';
 import { useSheet } from '../api/sheets';
 import { Loading } from '../components/Loading';
 import { Paper } from '../components/Paper';
-import { RawCellList } from '../components/RawCellList';
 import { TitleBlock } from '../components/TitleBlock';
+import { ReviewHeaderActions } from '../features/review/ReviewHeaderActions';
+import { SheetNotesColumn } from '../features/review/SheetNotesColumn';
+import { useTitleBlockSignatures } from '../features/review/useTitleBlockSignatures';
+import { LiveSheet } from '../features/sheet/LiveSheet';
+import { SheetActions } from '../features/sheet/manage/SheetActions';
 import { SheetTemplateBar } from '../features/templates/SheetTemplateBar';
-import { useProjectOrganization } from '../hooks/useProjectOrganization';
 import { useDocumentTitle } from '../hooks/useDocumentTitle';
+import { useProjectOrganization } from '../hooks/useProjectOrganization';
 
 /**
- * /sheets/:sheetId — one calculation sheet: its title block, then its cells.
- *
- * For now the cells are listed raw, as stored. The sheet editor (a later piece of work, to live in
- * src/features/sheet/) takes the place of <RawCellList>: it receives the same `sheet` and `role`,
- * binds each cell to the shared Yjs document and shows live results. The title block stays.
- * The prepared / checked / approved boxes stay empty until issued revisions record signatures.
+ * /sheets/:sheetId — one calculation sheet: its title block, the actions on the sheet as a
+ * whole (rename, move, delete), then its cells, live and co-edited.
+ * The title block shows the signatures of the current revision; the check actions sit under it
+ * and the notes rail beside the cells (features/review).
  * A request error (403, 404, ...) is thrown to the route's error boundary by useSheet.
  */
 export function SheetPage() {
   const { sheetId = '' } = useParams();
   const query = useSheet(sheetId);
+  const me = useMe();
   const owner = useProjectOrganization(query.data?.sheet.projectId);
+  const signatures = useTitleBlockSignatures(sheetId);
+  const cellsRef = useRef<HTMLDivElement>(null);
   useDocumentTitle(
     query.data ? `${query.data.sheet.calcNumber} ${query.data.sheet.title}` : 'Sheet',
   );
 
   if (!query.data) return <Loading what="the sheet" />;
-  const { sheet } = query.data;
+  const { sheet, role } = query.data;
   const organizationName = owner === undefined ? '…' : (owner?.organization.name ?? '—');
 
   return (
-    <Paper className="mx-auto max-w-[60rem]">
-      <TitleBlock sheet={sheet} organizationName={organizationName} />
-      <SheetTemplateBar sheet={sheet} role={query.data.role} />
-      <section aria-labelledby="cells-heading">
-        <div className="mb-2 flex items-baseline justify-between gap-3">
-          <h2 id="cells-heading" className="text-[1rem]">
-            Cells <span className="font-normal text-ink-muted">({sheet.content.cells.length})</span>
-          </h2>
-          <p className="text-[0.8125rem] text-ink-muted">
-            As stored; results are not evaluated on this page.
-          </p>
+    <Paper className="mx-auto max-w-[80rem]">
+      <TitleBlock sheet={sheet} organizationName={organizationName} signatures={signatures} />
+      <ReviewHeaderActions sheet={sheet} role={role} />
+      <SheetTemplateBar sheet={sheet} role={role} />
+      {owner ? <SheetActions sheet={sheet} membership={{ ...owner, role }} /> : null}
+      <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_19rem]">
+        <div ref={cellsRef} className="min-w-0">
+          {/* A sheet in check is read-only for everyone; a change of status reloads the live copy. */}
+          <LiveSheet
+            key={`${sheet.id}:${sheet.status}`}
+            sheet={sheet}
+            role={sheet.status === 'in-check' ? 'viewer' : role}
+            selfName={me.data?.user.name ?? 'You'}
+          />
         </div>
-        <RawCellList cells={sheet.content.cells} />
-      </section>
+        <SheetNotesColumn sheet={sheet} cellsRef={cellsRef} />
+      </div>
     </Paper>
   );
 }

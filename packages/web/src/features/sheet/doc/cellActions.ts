@@ -7,6 +7,7 @@ import {
   sheetCells,
   sheetMeta,
   sheetOrder,
+  type SheetFileCell,
 } from '@sheaf/sheet-doc';
 import * as Y from 'yjs';
 import { orderedCellIds, targetIndexForMove } from './cellOrder';
@@ -49,7 +50,7 @@ export function duplicateCell(doc: Y.Doc, id: string): string | null {
   const ids = orderedCellIds(doc);
   const cells = sheetCells(doc);
   const copyId = freshCellId((candidate) => cells.has(candidate));
-  const copy = { ...structuredClone(source), id: copyId };
+  const copy: SheetFileCell = { ...structuredClone(source), id: copyId };
   if (typeof source.name === 'string' && source.name !== '') {
     copy.name = uniqueName(source.name, cellNames(doc));
   }

@@ -42,6 +42,7 @@ describe('createSheetEvaluatorStore', () => {
   it('evaluates the sheet as the engine does', () => {
     const doc = docFromSheetContent(lug());
     const store = createSheetEvaluatorStore(doc);
+    store.attach();
     expect(value(store, 'k4', 'sx')).toBeCloseTo(37.5e6, 3);
     expect([...store.evaluator.results]).toEqual([...freshResults(doc)]);
     expect(store.names()).toEqual(['F', 'A', 'S', 'R', 'P', 'C']);
@@ -50,6 +51,7 @@ describe('createSheetEvaluatorStore', () => {
   it('re-evaluates only the edited cell and what depends on it, on every keystroke', () => {
     const doc = docFromSheetContent(lug());
     const store = createSheetEvaluatorStore(doc);
+    store.attach();
     const seen = { k4: vi.fn(), k1: vi.fn() };
     store.subscribeCell('k4', seen.k4);
     store.subscribeCell('k1', seen.k1);
@@ -70,6 +72,7 @@ describe('createSheetEvaluatorStore', () => {
     const remote = new Y.Doc();
     Y.applyUpdate(remote, Y.encodeStateAsUpdate(doc));
     const store = createSheetEvaluatorStore(doc);
+    store.attach();
     cellText(remote, 'k4', 'txy')!.insert(0, '1');
     Y.applyUpdate(doc, Y.encodeStateAsUpdate(remote, Y.encodeStateVector(doc)));
     expect(value(store, 'k4', 'txy')).toBeCloseTo(122e6, 3);
@@ -79,6 +82,7 @@ describe('createSheetEvaluatorStore', () => {
   it('reports an unknown name while a name is being retyped, and recovers', () => {
     const doc = docFromSheetContent(lug());
     const store = createSheetEvaluatorStore(doc);
+    store.attach();
     const name = cellText(doc, 'k4', 'name')!;
     name.delete(0, 1);
     expect(store.result('k5')).toMatchObject({ ok: false, error: { code: 'unknown-name', message: 'of: no cell named "S"' } });
@@ -91,6 +95,7 @@ describe('createSheetEvaluatorStore', () => {
   it('follows cells added, moved and deleted, and field values replaced whole', () => {
     const doc = docFromSheetContent(lug());
     const store = createSheetEvaluatorStore(doc);
+    store.attach();
     const q = addCell(doc, 'quantity', 1);
     cellText(doc, q, 'expr')!.insert(0, '3 kN');
     cellText(doc, 'k2', 'expr')!.insert(5, ' + q1');
@@ -108,9 +113,26 @@ describe('createSheetEvaluatorStore', () => {
     expect([...store.evaluator.results]).toEqual([...freshResults(doc)]);
   });
 
+  it('catches up with edits made while nobody was attached', () => {
+    const doc = docFromSheetContent(lug());
+    const store = createSheetEvaluatorStore(doc);
+    const detach = store.attach();
+    detach();
+    cellText(doc, 'k2', 'expr')!.insert(0, '2 * ');
+    moveCellTo(doc, 'k1', 3);
+    expect(value(store, 'k2', 'value')).toBe(18e3);
+    const listener = vi.fn();
+    store.subscribe(listener);
+    expect(value(store, 'k2', 'value')).toBe(36e3);
+    expect(store.evaluator.cells.map((c) => c.id)).toEqual(['k2', 'k3', 'k4', 'k1', 'k5', 'k6', 'k7']);
+    expect([...store.evaluator.results]).toEqual([...freshResults(doc)]);
+    expect(listener).toHaveBeenCalledTimes(1);
+  });
+
   it('gives the substituted equation in the unit system asked for, and stops after destroy', () => {
     const doc = docFromSheetContent(lug());
     const store = createSheetEvaluatorStore(doc);
+    store.attach();
     expect(store.equation('k2', 'SI')).toBe('\\mathrm{F} = 18\\,\\mathrm{kN}');
     expect(store.equation('k2', 'US')).toMatch(/\\mathrm{kip}/);
     expect(store.equation('k1', 'SI')).toBeNull();

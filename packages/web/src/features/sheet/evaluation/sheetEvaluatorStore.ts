@@ -11,6 +11,11 @@ import { orderedCellIds } from '../doc/cellOrder';
  * the server: a local edit is evaluated in the same tick it is typed.
  */
 export interface SheetEvaluatorStore {
+  /**
+   * Start following the document (counted: the last `detach` stops it). Subscribing attaches
+   * too. Attaching again after a pause first catches up with whatever changed meanwhile.
+   */
+  attach(): () => void;
   /** Called after any evaluation; use for things that depend on the whole sheet (names). */
   subscribe(listener: () => void): () => void;
   /** Called when this cell's result may have changed. */
@@ -20,16 +25,29 @@ export interface SheetEvaluatorStore {
   equation(cellId: string, system: UnitSystemId): string | null;
   /** Names of the cells, in sheet order (for completion and unknown-name marking). */
   names(): readonly string[];
+  /** Id, kind and name of every cell, in sheet order (a new array only after a pass). */
+  summary(): readonly CellSummary[];
   /** Grows by one with every evaluation pass. */
   version(): number;
   /** Ids evaluated by the last pass, in evaluation order (diagnostics and tests). */
   lastEvaluated(): readonly string[];
   readonly evaluator: Evaluator;
-  /** Stop observing the document. */
+  /** Stop observing the document, whoever is still subscribed. */
   destroy(): void;
 }
 
-/** Observe `doc` and evaluate it; call `destroy()` when done. */
+/** A cell as lists of cells need it. */
+export interface CellSummary {
+  readonly id: string;
+  readonly kind: string;
+  /** '' for notes and cells whose name is being typed. */
+  readonly name: string;
+}
+
+/**
+ * Evaluate `doc` now; follow its changes while attached (or subscribed to). Creating the store
+ * has no side effect, so it may be created during render.
+ */
 export function createSheetEvaluatorStore(doc: Y.Doc): SheetEvaluatorStore {
   const cells = sheetCells(doc);
   const order = sheetOrder(doc);
@@ -44,6 +62,9 @@ export function createSheetEvaluatorStore(doc: Y.Doc): SheetEvaluatorStore {
   const cellListeners = new Map<string, Set<() => void>>();
   let version = 0;
   let names = namesOf(evaluator);
+  let summary: readonly CellSummary[] = [];
+  let summaryKey = '';
+  let summaryStale = true;
   let lastEvaluated: readonly string[] = [];
   const equations = new WeakMap<CellResult, Map<UnitSystemId, string | null>>();
 
@@ -73,9 +94,36 @@ export function createSheetEvaluatorStore(doc: Y.Doc): SheetEvaluatorStore {
     apply(changed, reorder);
   };
 
-  cells.observeDeep(onCells);
-  order.observe(onOrder);
-  doc.on('afterTransaction', afterTransaction);
+  let attachments = 0;
+  function attach(): () => void {
+    if (attachments++ === 0) {
+      cells.observeDeep(onCells);
+      order.observe(onOrder);
+      doc.on('afterTransaction', afterTransaction);
+      catchUp();
+    }
+    let attached = true;
+    return () => {
+      if (!attached) return;
+      attached = false;
+      if (--attachments === 0) stopObserving();
+    };
+  }
+  function stopObserving() {
+    cells.unobserveDeep(onCells);
+    order.unobserve(onOrder);
+    doc.off('afterTransaction', afterTransaction);
+  }
+
+  /** Evaluate whatever changed while nobody was attached (cells compared as file JSON). */
+  function catchUp() {
+    const target = orderedCellIds(doc);
+    const given = new Map(evaluator.cells.map((cell) => [cell.id, JSON.stringify(cell)]));
+    const changed = target.filter((id) => given.get(id) !== JSON.stringify(cellFromDoc(doc, id)));
+    const gone = [...given.keys()].some((id) => !target.includes(id));
+    const moved = evaluator.cells.some((cell, index) => target[index] !== cell.id);
+    if (changed.length > 0 || gone || moved) apply(changed, true);
+  }
 
   function apply(changed: readonly string[], reorder: boolean) {
     const evaluated: string[] = [];
@@ -108,7 +156,10 @@ export function createSheetEvaluatorStore(doc: Y.Doc): SheetEvaluatorStore {
     }
     for (const id of evaluated) notify.add(id);
     lastEvaluated = evaluated;
-    names = namesOf(evaluator);
+    // Same names, same array: components that list names re-render only when one changes.
+    const nextNames = namesOf(evaluator);
+    if (nextNames.join('\u0000') !== names.join('\u0000')) names = nextNames;
+    summaryStale = true;
     version++;
     for (const id of notify) for (const listener of cellListeners.get(id) ?? []) listener();
     for (const listener of listeners) listener();
@@ -116,17 +167,24 @@ export function createSheetEvaluatorStore(doc: Y.Doc): SheetEvaluatorStore {
 
   return {
     evaluator,
+    attach,
     subscribe(listener) {
       listeners.add(listener);
-      return () => listeners.delete(listener);
+      const detach = attach();
+      return () => {
+        listeners.delete(listener);
+        detach();
+      };
     },
     subscribeCell(cellId, listener) {
       let set = cellListeners.get(cellId);
       if (!set) cellListeners.set(cellId, (set = new Set()));
       set.add(listener);
+      const detach = attach();
       return () => {
         set.delete(listener);
         if (set.size === 0) cellListeners.delete(cellId);
+        detach();
       };
     },
     result: (cellId) => evaluator.results.get(cellId),
@@ -139,12 +197,25 @@ export function createSheetEvaluatorStore(doc: Y.Doc): SheetEvaluatorStore {
       return bySystem.get(system) ?? null;
     },
     names: () => names,
+    summary() {
+      if (!summaryStale) return summary;
+      summaryStale = false;
+      const next = evaluator.cells.map((cell) => {
+        const { id, kind, name } = cell as { id: string; kind?: unknown; name?: unknown };
+        return { id, kind: typeof kind === 'string' ? kind : '', name: typeof name === 'string' ? name : '' };
+      });
+      const key = JSON.stringify(next);
+      if (key !== summaryKey) {
+        summary = next;
+        summaryKey = key;
+      }
+      return summary;
+    },
     version: () => version,
     lastEvaluated: () => lastEvaluated,
     destroy() {
-      cells.unobserveDeep(onCells);
-      order.unobserve(onOrder);
-      doc.off('afterTransaction', afterTransaction);
+      if (attachments > 0) stopObserving();
+      attachments = 0;
       listeners.clear();
       cellListeners.clear();
     },

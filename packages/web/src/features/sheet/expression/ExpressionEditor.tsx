@@ -62,6 +62,9 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
   const attributes = useRef(new Compartment());
   const onChange = useRef<(value: string) => void>(() => {});
   const latestNames = useRef(names);
+  // A field that turns from plain into shared text (its first character typed) gets a new editor;
+  // the caret moves over to it.
+  const hadFocus = useRef(false);
 
   const shared = binding.kind === 'shared' ? binding.text : null;
   const awareness = binding.kind === 'shared' ? binding.awareness : null;
@@ -132,7 +135,13 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
     }
     const created = new EditorView({ parent, state: EditorState.create({ doc: initial, extensions }) });
     view.current = created;
+    if (hadFocus.current) {
+      hadFocus.current = false;
+      created.focus();
+      created.dispatch({ selection: { anchor: created.state.doc.length } });
+    }
     return () => {
+      hadFocus.current = created.hasFocus;
       created.destroy();
       undoManager?.destroy();
       view.current = null;

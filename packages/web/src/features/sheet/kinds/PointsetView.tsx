@@ -1,0 +1,104 @@
+import { useId, useState } from 'react';
+import { setPlainField, setTextField } from '../doc/fieldWrites';
+import { ChoiceField } from '../fields/ChoiceField';
+import { StrengthFields } from '../fields/StrengthFields';
+import { useSheetEditor } from '../hooks/useSheetEditor';
+import type { KindViewProps } from './kindView';
+import { parseRows, rowsText } from './pointRows';
+
+const UNITS = ['MPa', 'kPa', 'GPa', 'Pa', 'ksi', 'psi'].map((u) => ({ value: u, label: u }));
+const COMPONENTS = [
+  ['sx', 'σx column'],
+  ['sy', 'σy column'],
+  ['txy', 'τxy column'],
+] as const;
+
+/**
+ * A set of stress points checked at once: the rows (typed or pasted, one point per line), which
+ * column holds which component, their unit, and the theory with its strengths.
+ */
+export function PointsetInputs({ cell, cellName, errorField, errorId }: KindViewProps) {
+  const { doc, readOnly } = useSheetEditor();
+  const rowsId = useId();
+  const rowsErrorId = useId();
+  const source = (typeof cell.source === 'object' && cell.source !== null ? cell.source : {}) as {
+    rows?: number[][];
+    upload?: string;
+  };
+  const columns = (typeof cell.columns === 'object' && cell.columns !== null ? cell.columns : {}) as Record<string, unknown>;
+  const rows = Array.isArray(source.rows) ? source.rows : null;
+  // While someone types, their text is theirs until it reads as numbers; then it is written.
+  const [draft, setDraft] = useState<string | null>(null);
+  const parsed = draft === null ? null : parseRows(draft);
+  const width = Math.max(3, ...(rows ?? []).map((row) => row.length));
+  const columnChoices = Array.from({ length: width }, (_, i) => ({ value: String(i), label: `column ${i + 1}` }));
+
+  return (
+    <>
+      {rows ? (
+        <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-x-2">
+          <label htmlFor={rowsId} className="pt-1 text-right text-[0.8125rem] text-ink-muted">
+            rows
+          </label>
+          <div>
+            <textarea
+              id={rowsId}
+              className="input h-24 font-mono text-[0.875rem]"
+              value={draft ?? rowsText(rows)}
+              readOnly={readOnly}
+              spellCheck={false}
+              aria-invalid={parsed && !parsed.ok ? 'true' : undefined}
+              aria-describedby={parsed && !parsed.ok ? rowsErrorId : undefined}
+              onFocus={() => setDraft(rowsText(rows))}
+              onChange={(event) => {
+                setDraft(event.target.value);
+                const next = parseRows(event.target.value);
+                if (next.ok) setPlainField(doc, cell.id, 'source', { rows: next.rows });
+              }}
+              onBlur={() => {
+                if (parsed === null || parsed.ok) setDraft(null);
+              }}
+            />
+            <p className="text-[0.75rem] text-ink-faint">
+              {rows.length} {rows.length === 1 ? 'point' : 'points'}; one per line, numbers apart by commas or spaces.
+            </p>
+            {parsed && !parsed.ok ? (
+              <p id={rowsErrorId} className="text-[0.8125rem] text-fail" role="alert">
+                {parsed.error} — not saved until it reads as numbers.
+              </p>
+            ) : null}
+          </div>
+        </div>
+      ) : (
+        <p className="pl-[5rem] text-[0.8125rem] text-ink-muted">
+          Points from upload <span className="font-mono">{source.upload ?? '—'}</span>
+        </p>
+      )}
+      <div className="grid gap-1 sm:grid-cols-2 sm:gap-x-3">
+        {COMPONENTS.map(([key, label]) => (
+          <ChoiceField
+            key={key}
+            label={key}
+            value={String(columns[key] ?? '')}
+            choices={columnChoices}
+            readOnly={readOnly}
+            invalid={errorField === `columns.${key}`}
+            describedBy={errorId}
+            unknownLabel={(v) => `${label}: ${v}`}
+            onChange={(value) => setPlainField(doc, cell.id, 'columns', { ...columns, [key]: Number(value) })}
+          />
+        ))}
+        <ChoiceField
+          label="unit"
+          value={typeof cell.unit === 'string' ? cell.unit : 'MPa'}
+          choices={UNITS}
+          readOnly={readOnly}
+          invalid={errorField === 'unit'}
+          describedBy={errorId}
+          onChange={(value) => setTextField(doc, cell.id, 'unit', value)}
+        />
+      </div>
+      <StrengthFields cell={cell} cellName={cellName} errorField={errorField} errorId={errorId} />
+    </>
+  );
+}

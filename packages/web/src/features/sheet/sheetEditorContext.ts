@@ -1,0 +1,19 @@
+import { createContext } from 'react';
+import type { Awareness } from 'y-protocols/awareness';
+import type * as Y from 'yjs';
+import type { SheetEvaluatorStore } from './evaluation/sheetEvaluatorStore';
+import type { CompletionSheet } from './expression/expressionCompletion';
+
+/** What every part of the sheet editor shares: the document, its results, who is here. */
+export interface SheetEditorContextValue {
+  doc: Y.Doc;
+  store: SheetEvaluatorStore;
+  /** Presence of the live connection; null in a preview that is not connected. */
+  awareness: Awareness | null;
+  /** Checkers, viewers and previews: nothing can be changed, no structure controls are shown. */
+  readOnly: boolean;
+  /** Live view of the sheet for expression completion. */
+  completion: CompletionSheet;
+}
+
+export const SheetEditorContext = createContext<SheetEditorContextValue | null>(null);
