@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { stressInvariants } from '../stress/invariants';
-import { mohrCircles3D } from '../stress/mohrCircle';
 import { octahedralStresses } from '../stress/octahedral';
 import { principalPlaneStresses } from '../stress/principalPlane';
 import { principalStresses } from '../stress/principalStresses';
@@ -71,15 +70,14 @@ export const principalKind: CellKind<PrincipalCell> = {
       .number('I1', inv.I1, 'stress')
       .number('I2', inv.I2, 'stress2')
       .number('I3', inv.I3, 'stress3');
-    const mohr = mohrCircles3D(state);
-    const [c12, c23, c13] = mohr.circles;
+    // The three Mohr circles from the principal stresses already found (as mohrCircles3D does).
     values
-      .number('center12', c12.center, 'stress')
-      .number('radius12', c12.radius, 'stress')
-      .number('center23', c23.center, 'stress')
-      .number('radius23', c23.radius, 'stress')
-      .number('center13', c13.center, 'stress')
-      .number('radius13', c13.radius, 'stress');
+      .number('center12', (s1 + s2) / 2, 'stress')
+      .number('radius12', (s1 - s2) / 2, 'stress')
+      .number('center23', (s2 + s3) / 2, 'stress')
+      .number('radius23', (s2 - s3) / 2, 'stress')
+      .number('center13', (s1 + s3) / 2, 'stress')
+      .number('radius13', (s1 - s3) / 2, 'stress');
     principal.directions.forEach((d, i) => values.list(`n${i + 1}`, d, 'ratio'));
     return values.ok(cell.id, 'principal', { state });
   },

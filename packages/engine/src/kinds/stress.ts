@@ -47,8 +47,11 @@ export const stressKind: CellKind<StressCell> = {
   id: 'stress',
   label: 'Stress state',
   schema: stressCellSchema,
-  expressions: (cell) =>
-    COMPONENTS.flatMap((k): ExpressionField[] => (cell[k] === undefined ? [] : [[k, cell[k]!]])),
+  expressions(cell) {
+    const fields: ExpressionField[] = [];
+    for (const k of COMPONENTS) if (cell[k] !== undefined) fields.push([k, cell[k]!]);
+    return fields;
+  },
   references: () => [],
   evaluate(cell, context) {
     const state: Record<string, number> = {};

@@ -3,6 +3,7 @@ import type { MaterialsLookup } from '../kinds/materials';
 import type { CellResult } from '../kinds/result';
 import type { ExpressionField } from '../kinds/types';
 import type { UnitSystemId } from '../units/unitSystems';
+import { compileExpression } from '../units/expression';
 import { buildGraph, downstream, type GraphNode, type SheetGraph } from './graph';
 import { checkCell, evaluateCell, type CheckedCell } from './evaluateCell';
 
@@ -85,6 +86,22 @@ function entryOf(raw: CellInput, index: number): Entry {
   return { raw, checked, node: { id: checked.id, name, expressions, references } };
 }
 
+/** True when two versions of a cell have the same place in the graph: name, symbols per field, references. */
+function sameShape(a: GraphNode, b: GraphNode): boolean {
+  if (a.id !== b.id || a.name !== b.name || a.expressions.length !== b.expressions.length) return false;
+  if (a.references.length !== b.references.length) return false;
+  for (let i = 0; i < a.references.length; i++) {
+    if (a.references[i]![0] !== b.references[i]![0] || a.references[i]![1] !== b.references[i]![1]) return false;
+  }
+  for (let i = 0; i < a.expressions.length; i++) {
+    if (a.expressions[i]![0] !== b.expressions[i]![0]) return false;
+    const x = compileExpression(a.expressions[i]![1]).symbols;
+    const y = compileExpression(b.expressions[i]![1]).symbols;
+    if (x.length !== y.length || x.some((s, k) => s !== y[k])) return false;
+  }
+  return true;
+}
+
 /**
  * Create an evaluator and evaluate the whole sheet.
  * @example
@@ -113,8 +130,11 @@ export function createEvaluator(sheet: SheetInput, options: EvaluatorOptions = {
     },
   };
 
-  /** Evaluate the given cells in graph order; keep results in sheet order. */
-  function run(dirty: ReadonlySet<string> | null): UpdateReport {
+  /**
+   * Evaluate the given cells in graph order; keep results in sheet order (`reorder` when cells
+   * were added, removed or moved).
+   */
+  function run(dirty: ReadonlySet<string> | null, reorder = true): UpdateReport {
     const evaluated: string[] = [];
     for (const id of graph.order) {
       if (dirty && !dirty.has(id)) continue;
@@ -124,6 +144,7 @@ export function createEvaluator(sheet: SheetInput, options: EvaluatorOptions = {
       evaluations++;
       evaluated.push(id);
     }
+    if (!reorder) return { evaluated };
     const ordered = new Map<string, CellResult>();
     for (const e of entries) {
       const r = results.get(e.node.id);
@@ -216,6 +237,12 @@ export function createEvaluator(sheet: SheetInput, options: EvaluatorOptions = {
     if (old.raw === cell || JSON.stringify(old.raw) === JSON.stringify(cell)) return { evaluated: [] };
     const entry = entryOf(cell, position);
     entries = entries.map((e, i) => (i === position ? entry : e));
+    if (sameShape(old.node, entry.node)) {
+      // The commonest edit, a new number: same name, same symbols, same references, so the
+      // graph and the order of results stay as they are.
+      index.set(entry.node.id, entry);
+      return run(downstream(graph, [entry.node.id]), false);
+    }
     const before = rebuild();
     return run(affected(before, [entry.node.id], [old.node.name, entry.node.name]));
   }

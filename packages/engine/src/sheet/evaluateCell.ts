@@ -60,9 +60,8 @@ export function evaluateCell(checked: CheckedCell, view: SheetView): CellResult 
     return cellFailure(id, cell.kind, 'duplicate-name', `name: another cell (${others.join(', ')}) is also named "${cell.name}"`);
   }
   const references = graph.references.get(id) ?? [];
-  const unknown = references.find((r) => r.target === null);
-  if (unknown) {
-    return cellFailure(id, cell.kind, 'unknown-name', `${unknown.field}: no cell named "${unknown.name}"`);
+  for (const r of references) {
+    if (r.target === null) return cellFailure(id, cell.kind, 'unknown-name', `${r.field}: no cell named "${r.name}"`);
   }
   for (const r of references) {
     const upstream = view.result(r.target!);
@@ -76,42 +75,66 @@ export function evaluateCell(checked: CheckedCell, view: SheetView): CellResult 
 }
 
 function makeContext(cellId: string, kind: KindId, references: readonly Reference[], view: SheetView): KindContext {
-  let scope: Map<string, unknown> | null = null;
-  const byName = new Map<string, CellOk>();
-  for (const r of references) {
-    const res = r.target === null ? undefined : view.result(r.target);
-    if (res?.ok) byName.set(r.name, res);
-  }
-  const scopeOf = (): Map<string, unknown> => {
-    if (!scope) {
-      scope = new Map();
-      for (const [name, res] of byName) scope.set(name, scopeValueOfResult(res));
+  return new CellContext(cellId, kind, references, view);
+}
+
+/**
+ * The context of one cell's evaluation. A class rather than an object of closures: a sheet
+ * evaluates hundreds of cells, and methods on a prototype cost nothing per cell.
+ */
+class CellContext implements KindContext {
+  private scope: Map<string, unknown> | null = null;
+  private readonly byName = new Map<string, CellOk>();
+  readonly materials: SheetView['materials'];
+
+  constructor(
+    readonly cellId: string,
+    private readonly kind: KindId,
+    private readonly references: readonly Reference[],
+    view: SheetView,
+  ) {
+    this.materials = view.materials;
+    for (const r of references) {
+      const res = r.target === null ? undefined : view.result(r.target);
+      if (res?.ok) this.byName.set(r.name, res);
     }
-    return scope;
-  };
-  const quantity = (field: string, expression: string): Quantity | CellFailure => {
-    const q = evaluateExpression(expression, scopeOf());
-    if (isExpressionProblem(q)) return cellFailure(cellId, kind, q.code, `${field}: ${q.message}`);
-    return q;
-  };
-  return {
-    cellId,
-    materials: view.materials,
-    lookup: (name) => byName.get(name),
-    quantity,
-    value(field: string, expression: string, expected: ExpectedDimension) {
-      const q = quantity(field, expression);
-      if ('ok' in q) return q;
-      const mismatch = checkDimension(field, q.dim, expected);
-      return mismatch ? cellFailure(cellId, kind, 'unit-mismatch', mismatch) : q.si;
-    },
-    state(field: string, name: string): StressTensor | CellFailure {
-      const res = byName.get(name);
-      if (!res) return cellFailure(cellId, kind, 'unknown-name', `${field}: no cell named "${name}"`);
-      if (!STATE_KINDS.includes(res.kind) || !res.state) {
-        return cellFailure(cellId, kind, 'invalid-field', `${field}: "${name}" is a ${res.kind} cell; give ${STATE_WORDS}`);
+  }
+
+  /** Only names written in expressions enter the scope; `of` references are read as results. */
+  private scopeOf(): Map<string, unknown> {
+    if (!this.scope) {
+      this.scope = new Map();
+      for (const r of this.references) {
+        const res = this.byName.get(r.name);
+        if (!r.direct && res && !this.scope.has(r.name)) this.scope.set(r.name, scopeValueOfResult(res));
       }
-      return res.state;
-    },
-  };
+    }
+    return this.scope;
+  }
+
+  lookup(name: string): CellOk | undefined {
+    return this.byName.get(name);
+  }
+
+  quantity(field: string, expression: string): Quantity | CellFailure {
+    const q = evaluateExpression(expression, this.scopeOf());
+    if (isExpressionProblem(q)) return cellFailure(this.cellId, this.kind, q.code, `${field}: ${q.message}`);
+    return q;
+  }
+
+  value(field: string, expression: string, expected: ExpectedDimension): number | CellFailure {
+    const q = this.quantity(field, expression);
+    if ('ok' in q) return q;
+    const mismatch = checkDimension(field, q.dim, expected);
+    return mismatch ? cellFailure(this.cellId, this.kind, 'unit-mismatch', mismatch) : q.si;
+  }
+
+  state(field: string, name: string): StressTensor | CellFailure {
+    const res = this.byName.get(name);
+    if (!res) return cellFailure(this.cellId, this.kind, 'unknown-name', `${field}: no cell named "${name}"`);
+    if (!STATE_KINDS.includes(res.kind) || !res.state) {
+      return cellFailure(this.cellId, this.kind, 'invalid-field', `${field}: "${name}" is a ${res.kind} cell; give ${STATE_WORDS}`);
+    }
+    return res.state;
+  }
 }

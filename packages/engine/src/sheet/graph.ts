@@ -17,6 +17,8 @@ export interface Reference {
   readonly name: string;
   /** The id of the cell with that name, or null when no cell has it. */
   readonly target: string | null;
+  /** True for a direct reference (`of`), false for a name in an expression. */
+  readonly direct: boolean;
 }
 
 /** The dependency graph of a sheet. */
@@ -41,133 +43,159 @@ export interface SheetGraph {
  * it is a unit or an allowed constant it is not a reference; else it is an unknown name
  * (target null). Names in `of` fields are always references. Cycles are found as strongly
  * connected components (Tarjan, iterative); the order is a depth-first post-order in sheet order,
- * so it is the same for the same sheet on every run.
+ * so it is the same for the same sheet on every run. Runs in O(cells + references) on integer
+ * indexes: the evaluator rebuilds it on every edit.
  */
 export function buildGraph(nodes: readonly GraphNode[]): SheetGraph {
+  const n = nodes.length;
+  const ownerIndex = new Map<string, number>();
   const owner = new Map<string, string>();
-  const holders = new Map<string, string[]>();
-  for (const node of nodes) {
-    if (node.name === null) continue;
-    if (!owner.has(node.name)) owner.set(node.name, node.id);
-    const list = holders.get(node.name) ?? [];
-    list.push(node.id);
-    holders.set(node.name, list);
+  const sharedNames: string[] = [];
+  for (let i = 0; i < n; i++) {
+    const name = nodes[i]!.name;
+    if (name === null) continue;
+    if (!ownerIndex.has(name)) {
+      ownerIndex.set(name, i);
+      owner.set(name, nodes[i]!.id);
+    } else if (!sharedNames.includes(name)) {
+      sharedNames.push(name);
+    }
   }
   const duplicates = new Map<string, string[]>();
-  for (const ids of holders.values()) {
-    if (ids.length < 2) continue;
+  for (const name of sharedNames) {
+    const ids: string[] = [];
+    for (let i = 0; i < n; i++) if (nodes[i]!.name === name) ids.push(nodes[i]!.id);
     for (const id of ids) duplicates.set(id, ids.filter((other) => other !== id));
   }
 
   const references = new Map<string, Reference[]>();
-  const edges = new Map<string, string[]>();
-  for (const node of nodes) {
+  const edges: number[][] = new Array<number[]>(n);
+  for (let i = 0; i < n; i++) {
+    const node = nodes[i]!;
     const refs: Reference[] = [];
-    const seen = new Set<string>();
-    const add = (field: string, name: string, direct: boolean) => {
-      const target = owner.get(name) ?? null;
-      if (target === null && !direct && isFreeStandingSymbol(name)) return;
-      const key = `${field}\u0000${name}`;
-      if (seen.has(key)) return;
-      seen.add(key);
-      refs.push({ field, name, target });
-    };
-    for (const [field, text] of node.expressions) for (const s of compileExpression(text).symbols) add(field, s, false);
-    for (const [field, name] of node.references) add(field, name, true);
+    const targets: number[] = [];
+    for (const [field, text] of node.expressions) {
+      for (const symbol of compileExpression(text).symbols) addReference(refs, targets, nodes, ownerIndex, field, symbol, false);
+    }
+    for (const [field, name] of node.references) addReference(refs, targets, nodes, ownerIndex, field, name, true);
     references.set(node.id, refs);
-    edges.set(node.id, [...new Set(refs.flatMap((r) => (r.target === null ? [] : [r.target])))]);
+    edges[i] = targets;
   }
 
+  const dependentIndexes: number[][] = Array.from({ length: n }, () => []);
+  for (let i = 0; i < n; i++) for (const t of edges[i]!) dependentIndexes[t]!.push(i);
   const dependents = new Map<string, string[]>();
-  for (const node of nodes) dependents.set(node.id, []);
-  for (const [id, targets] of edges) for (const t of targets) dependents.get(t)?.push(id);
+  for (let i = 0; i < n; i++) dependents.set(nodes[i]!.id, dependentIndexes[i]!.map((d) => nodes[d]!.id));
 
-  const nameOf = new Map(nodes.map((n) => [n.id, n.name ?? n.id]));
   const cycles = new Map<string, string[]>();
-  for (const component of stronglyConnected(nodes.map((n) => n.id), edges)) {
-    const selfLoop = component.length === 1 && edges.get(component[0]!)!.includes(component[0]!);
+  for (const component of stronglyConnected(n, edges)) {
+    const selfLoop = component.length === 1 && edges[component[0]!]!.includes(component[0]!);
     if (component.length < 2 && !selfLoop) continue;
-    const names = component.map((id) => nameOf.get(id)!);
-    for (const id of component) cycles.set(id, names);
+    const names = component.map((i) => nodes[i]!.name ?? nodes[i]!.id);
+    for (const i of component) cycles.set(nodes[i]!.id, names);
   }
 
-  return { order: postOrder(nodes.map((n) => n.id), edges), owner, duplicates, references, dependents, cycles };
+  const order = postOrder(n, edges).map((i) => nodes[i]!.id);
+  return { order, owner, duplicates, references, dependents, cycles };
 }
 
-/** Depth-first post-order (dependencies first), iterative, starting from each id in sheet order. */
-function postOrder(ids: readonly string[], edges: ReadonlyMap<string, readonly string[]>): string[] {
-  const order: string[] = [];
-  const state = new Map<string, 1 | 2>();
-  for (const start of ids) {
-    if (state.has(start)) continue;
-    const stack: [string, number][] = [[start, 0]];
-    state.set(start, 1);
-    while (stack.length) {
-      const top = stack[stack.length - 1]!;
-      const next = edges.get(top[0])!;
-      if (top[1] < next.length) {
-        const child = next[top[1]++]!;
-        if (!state.has(child)) {
-          state.set(child, 1);
-          stack.push([child, 0]);
+function addReference(
+  refs: Reference[],
+  targets: number[],
+  nodes: readonly GraphNode[],
+  ownerIndex: ReadonlyMap<string, number>,
+  field: string,
+  name: string,
+  direct: boolean,
+): void {
+  const target = ownerIndex.get(name);
+  if (target === undefined && !direct && isFreeStandingSymbol(name)) return;
+  for (const r of refs) if (r.field === field && r.name === name) return;
+  refs.push({ field, name, target: target === undefined ? null : nodes[target]!.id, direct });
+  if (target !== undefined && !targets.includes(target)) targets.push(target);
+}
+
+/** Depth-first post-order (dependencies first), iterative, starting from each cell in sheet order. */
+function postOrder(n: number, edges: readonly (readonly number[])[]): number[] {
+  const order: number[] = [];
+  const seen = new Uint8Array(n);
+  const stack = new Int32Array(n);
+  const next = new Int32Array(n);
+  for (let start = 0; start < n; start++) {
+    if (seen[start]) continue;
+    let top = 0;
+    stack[0] = start;
+    next[0] = 0;
+    seen[start] = 1;
+    while (top >= 0) {
+      const v = stack[top]!;
+      const out = edges[v]!;
+      if (next[top]! < out.length) {
+        const w = out[next[top]!++]!;
+        if (!seen[w]) {
+          seen[w] = 1;
+          top++;
+          stack[top] = w;
+          next[top] = 0;
         }
       } else {
-        state.set(top[0], 2);
-        order.push(top[0]);
-        stack.pop();
+        order.push(v);
+        top--;
       }
     }
   }
   return order;
 }
 
-/** Tarjan's strongly connected components, iterative; components in sheet order of their members. */
-function stronglyConnected(ids: readonly string[], edges: ReadonlyMap<string, readonly string[]>): string[][] {
-  const index = new Map<string, number>();
-  const low = new Map<string, number>();
-  const onStack = new Set<string>();
-  const stack: string[] = [];
-  const components: string[][] = [];
-  const position = new Map(ids.map((id, i) => [id, i]));
+/** Tarjan's strongly connected components, iterative, on indexes; members sorted in sheet order. */
+function stronglyConnected(n: number, edges: readonly (readonly number[])[]): number[][] {
+  const index = new Int32Array(n).fill(-1);
+  const low = new Int32Array(n);
+  const onStack = new Uint8Array(n);
+  const stack: number[] = [];
+  const workNode = new Int32Array(n);
+  const workNext = new Int32Array(n);
+  const components: number[][] = [];
   let counter = 0;
-  for (const root of ids) {
-    if (index.has(root)) continue;
-    const work: [string, number][] = [[root, 0]];
-    index.set(root, counter);
-    low.set(root, counter++);
+  for (let root = 0; root < n; root++) {
+    if (index[root] !== -1) continue;
+    let top = 0;
+    workNode[0] = root;
+    workNext[0] = 0;
+    index[root] = low[root] = counter++;
     stack.push(root);
-    onStack.add(root);
-    while (work.length) {
-      const frame = work[work.length - 1]!;
-      const [v] = frame;
-      const next = edges.get(v)!;
-      if (frame[1] < next.length) {
-        const w = next[frame[1]++]!;
-        if (!index.has(w)) {
-          index.set(w, counter);
-          low.set(w, counter++);
+    onStack[root] = 1;
+    while (top >= 0) {
+      const v = workNode[top]!;
+      const out = edges[v]!;
+      if (workNext[top]! < out.length) {
+        const w = out[workNext[top]!++]!;
+        if (index[w] === -1) {
+          index[w] = low[w] = counter++;
           stack.push(w);
-          onStack.add(w);
-          work.push([w, 0]);
-        } else if (onStack.has(w)) {
-          low.set(v, Math.min(low.get(v)!, index.get(w)!));
+          onStack[w] = 1;
+          top++;
+          workNode[top] = w;
+          workNext[top] = 0;
+        } else if (onStack[w]) {
+          low[v] = Math.min(low[v]!, index[w]!);
         }
         continue;
       }
-      work.pop();
-      if (work.length) {
-        const parent = work[work.length - 1]![0];
-        low.set(parent, Math.min(low.get(parent)!, low.get(v)!));
+      top--;
+      if (top >= 0) {
+        const parent = workNode[top]!;
+        low[parent] = Math.min(low[parent]!, low[v]!);
       }
-      if (low.get(v) === index.get(v)) {
-        const component: string[] = [];
-        let w: string;
+      if (low[v] === index[v]) {
+        const component: number[] = [];
+        let w: number;
         do {
           w = stack.pop()!;
-          onStack.delete(w);
+          onStack[w] = 0;
           component.push(w);
         } while (w !== v);
-        components.push(component.sort((a, b) => position.get(a)! - position.get(b)!));
+        components.push(component.sort((a, b) => a - b));
       }
     }
   }

@@ -123,8 +123,16 @@ export function compileExpression(text: string): CompiledExpression {
  * @public
  */
 export function isFreeStandingSymbol(name: string): boolean {
-  return isUnitName(name) || ALLOWED_CONSTANTS.has(name);
+  // Cached: units do not change while the engine runs, and the lookup in mathjs is slow.
+  let known = freeStanding.get(name);
+  if (known === undefined) {
+    known = isUnitName(name) || ALLOWED_CONSTANTS.has(name);
+    if (freeStanding.size < CACHE_LIMIT) freeStanding.set(name, known);
+  }
+  return known;
 }
+
+const freeStanding = new Map<string, boolean>();
 
 /** Convert what mathjs returned into a quantity, or say why it is not one. */
 function toQuantity(value: unknown): Quantity | ExpressionProblem {
@@ -146,7 +154,7 @@ function toQuantity(value: unknown): Quantity | ExpressionProblem {
 
 /**
  * Evaluate an expression against a scope of named values (cells), giving a quantity in SI base
- * units. The scope is read only; mathjs gets a fresh Map each time. An expression that uses no
+ * units. The scope is only read (expressions cannot assign). An expression that uses no
  * name bound in the scope is evaluated once and remembered.
  * @example evaluateExpression('18 kN / (40 mm * 12 mm)', new Map()) // { si: 37.5e6, dim: pressure }
  * @public
@@ -160,9 +168,9 @@ export function evaluateExpression(text: string, scope: ReadonlyMap<string, unkn
     if (known) return known;
   }
   const code = compiled.code;
-  const local = new Map<string, unknown>();
-  for (const s of compiled.symbols) if (scope.has(s)) local.set(s, scope.get(s));
-  const raw = tryMath(() => code.evaluate(local) as unknown, 'evaluation');
+  // mathjs only reads the scope here: assignments never compile (see inspect), so the caller's
+  // map cannot change and no state survives from one evaluation to the next.
+  const raw = tryMath(() => code.evaluate(scope as Map<string, unknown>) as unknown, 'evaluation');
   const result = isProblem(raw) ? raw : toQuantity(raw);
   if (!bound) {
     if (constants.size >= CACHE_LIMIT) constants.delete(constants.keys().next().value as string);

@@ -90,9 +90,17 @@ export function isUnit(value: unknown): value is Unit {
   return math.isUnit(value);
 }
 
+const templates = new Map<string, Unit>();
+
 /** A mathjs Unit holding `valueSI` in the given SI base unit string (e.g. `kg m^-1 s^-2`). */
 export function unitFromSI(valueSI: number, baseUnit: string): Unit {
-  const u = math.unit(baseUnit);
+  // Parsing a unit string costs ten times a clone: parse each base unit once.
+  let template = templates.get(baseUnit);
+  if (!template) {
+    template = math.unit(baseUnit);
+    templates.set(baseUnit, template);
+  }
+  const u = template.clone();
   // mathjs keeps a Unit's value in SI base units internally; setting it keeps full precision.
   (u as unknown as { value: number }).value = valueSI;
   return u;
