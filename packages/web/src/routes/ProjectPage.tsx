@@ -11,11 +11,12 @@ import { Paper } from '../components/Paper';
 import { RequireOrganization } from '../components/RequireOrganization';
 import { SheetsTable } from '../components/SheetsTable';
 import { TextField } from '../components/TextField';
+import { ImportSheetForm } from '../features/sheet/manage/ImportSheetForm';
 import { splitServerError } from '../forms/serverErrors';
 import { checkMaxLength, checkRequired } from '../forms/validators';
 import { useDocumentTitle } from '../hooks/useDocumentTitle';
 
-/** /projects/:projectId — one project's sheets, and a form to start a new sheet in it. */
+/** /projects/:projectId — one project's sheets, a form to start a new sheet in it, and an import of a sheet file. */
 export function ProjectPage() {
   return (
     <RequireOrganization>
@@ -60,7 +61,14 @@ function ProjectSheets({ membership }: { membership: Membership }) {
           <SheetsTable sheets={sheets.data} caption={`Sheets of ${name}`} showProject={false} />
         )}
       </Paper>
-      {can(membership.role, 'sheet.create') ? <NewSheetForm projectId={projectId} /> : null}
+      {can(membership.role, 'sheet.create') ? (
+        <>
+          <NewSheetForm projectId={projectId} />
+          <Paper>
+            <ImportSheetForm projectId={projectId} />
+          </Paper>
+        </>
+      ) : null}
     </div>
   );
 }
