@@ -20,12 +20,17 @@ export const reviewKeys = {
 
 const enc = encodeURIComponent;
 
-/** GET /api/sheets/:sheetId/review: status, preparer, checker, signatures and what you may do. */
+/**
+ * GET /api/sheets/:sheetId/review: status, preparer, checker, signatures and what you may do.
+ * Polled while the page is open, so a submission, return or approval made by someone else shows
+ * within a quarter of a minute.
+ */
 export function useReviewState(sheetId: string) {
   return useQuery({
     queryKey: reviewKeys.state(sheetId),
     queryFn: ({ signal }) =>
       apiRequest<ReviewStateResponse>(`/api/sheets/${enc(sheetId)}/review`, { signal }).then((r) => r.review),
+    refetchInterval: 15_000,
   });
 }
 

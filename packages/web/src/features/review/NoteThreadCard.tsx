@@ -88,8 +88,9 @@ function NoteBody({ note }: { note: Note }) {
 /** The body with each `@name` of a mentioned member set in bold. */
 function withMentions(note: Note) {
   if (note.mentions.length === 0) return note.body;
-  const names = note.mentions.map((m) => m.name).sort((a, b) => b.length - a.length);
-  const pattern = new RegExp(`(@(?:${names.map(escapeRegExp).join('|')}))`, 'giu');
+  // Members are named by full name or first name (the server also takes the mailbox name).
+  const names = note.mentions.flatMap((m) => [m.name, m.name.split(/\s+/)[0] ?? m.name]).sort((a, b) => b.length - a.length);
+  const pattern = new RegExp(`(@(?:${names.map(escapeRegExp).join('|')}))(?![\\p{L}\\p{N}])`, 'giu');
   return note.body.split(pattern).map((part, index) =>
     index % 2 === 1 ? (
       <strong key={index} className="font-semibold">

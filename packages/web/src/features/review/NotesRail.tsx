@@ -52,7 +52,7 @@ export function NotesRail({ sheetId, cellIds, cellLabels = {}, cellsRef, revisio
       <div className="mb-2 flex flex-wrap items-baseline justify-between gap-2 border-b border-paper-rule pb-1">
         <h2 className="text-[0.9375rem]">{readOnly ? `Notes on revision ${revision}` : 'Notes'}</h2>
         <span className="flex flex-wrap gap-3">
-          <NoteStateLabel state="open" count={open} />
+          {open > 0 ? <NoteStateLabel state="open" count={open} /> : <span className="text-ink-muted">no open notes</span>}
           {resolved > 0 ? (
             <label className="inline-flex items-center gap-1 text-ink-muted">
               <input type="checkbox" checked={showResolved} onChange={(event) => setShowResolved(event.target.checked)} />

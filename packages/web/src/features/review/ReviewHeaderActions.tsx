@@ -1,8 +1,10 @@
-import { useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useMe } from '../../api/auth';
 import { describeError } from '../../api/ApiError';
 import { useReviewState } from '../../api/review';
+import { sheetKeys } from '../../api/sheets';
 import type { Role, SheetSummary } from '../../api/types';
 import { ApproveSheetPanel } from './ApproveSheetPanel';
 import { ReassignCheckerPanel } from './ReassignCheckerPanel';
@@ -23,6 +25,12 @@ export function ReviewHeaderActions({ sheet }: { sheet: SheetSummary; role?: Rol
   const review = useReviewState(sheet.id);
   const me = useMe();
   const [open, setOpen] = useState<Action | null>(null);
+  const queryClient = useQueryClient();
+  const status = review.data?.status;
+  // Someone else submitted, returned or approved the sheet: the page's copy of it is out of date.
+  useEffect(() => {
+    if (status !== undefined && status !== sheet.status) void queryClient.invalidateQueries({ queryKey: sheetKeys.detail(sheet.id) });
+  }, [status, sheet.status, sheet.id, queryClient]);
 
   if (review.isError) {
     return <p role="alert" className="mb-4 text-fail">Could not load the check status: {describeError(review.error)}</p>;

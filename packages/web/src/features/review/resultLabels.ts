@@ -3,7 +3,6 @@
  * listed here are shown as they are.
  */
 const LABELS: Readonly<Record<string, string>> = {
-  value: 'value',
   factor: 'factor of safety',
   margin: 'margin of safety',
   pass: 'verdict',
