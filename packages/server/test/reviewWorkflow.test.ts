@@ -187,6 +187,12 @@ describe('check and approval workflow', () => {
     const [lastApproval] = history.events;
     expect(lastApproval).toMatchObject({ actor: { id: team.users.owner.id }, revision: 2, summary: 'Approved revision 2 over 1 open note; revision 1 superseded' });
     expect(history.events.find((e) => e.action === 'sheet.returned')?.message).toBe('Answer the note on S and add LC3.');
+    expect(history.events.filter((e) => e.action.startsWith('note.')).map((e) => e.summary).reverse()).toEqual([
+      'Wrote a note on cell S',
+      'Replied to a note on cell S',
+      'Resolved the note on cell S',
+      'Wrote a note on cell DE',
+    ]);
   });
 
   it('lets nobody approve a sheet they prepared, even when named checker by a reassignment', async () => {

@@ -175,7 +175,8 @@ export function reviewRoutes(): Route[] {
         const grant = grantOf(access);
         const userId = userIdOf(user);
         const content = await liveSheetContent(deps.dataSource, collabOf(req), grant.sheet.id);
-        const result = await createNote(deps.dataSource, grant.sheet.id, { userId, ip: req.ip }, body, new Set(content.cells.map((cell) => cell.id)));
+        const cells = new Map(content.cells.map((cell) => [cell.id, typeof cell.name === 'string' && cell.name !== '' ? cell.name : null]));
+        const result = await createNote(deps.dataSource, grant.sheet.id, { userId, ip: req.ip }, body, cells);
         if (result.mentioned.length > 0) {
           const sheet = await deps.dataSource.transaction((manager) => lockWorkflowRow(manager, grant.sheet.id));
           const cell = content.cells.find((c) => c.id === body.cellId);

@@ -50,7 +50,7 @@ export async function approvedSheet(dataSource: DataSource, team: Team): Promise
 /** A note thread on cell `cellId` by `authorId`, resolved when asked. Returns its id. */
 export async function noteOn(dataSource: DataSource, sheetId: string, authorId: string, options: { cellId?: string; resolved?: boolean; body?: string } = {}): Promise<string> {
   const cellId = options.cellId ?? 's1';
-  const created = await createNote(dataSource, sheetId, { userId: authorId }, { cellId, body: options.body ?? 'Check the section modulus.' }, new Set([cellId]));
+  const created = await createNote(dataSource, sheetId, { userId: authorId }, { cellId, body: options.body ?? 'Check the section modulus.' }, new Map([[cellId, null]]));
   if (options.resolved) await setThreadResolved(dataSource, sheetId, created.thread.id, { userId: authorId }, true);
   return created.thread.id;
 }

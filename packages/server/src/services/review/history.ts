@@ -16,6 +16,11 @@ function text(value: unknown): string | null {
   return typeof value === 'string' && value !== '' ? value : null;
 }
 
+/** "cell S" by name where the cell has one, else by its id. */
+function cellWords(details: Record<string, unknown>): string {
+  return `cell ${text(details.cellName) ?? text(details.cellId) ?? '?'}`;
+}
+
 /** One line in words for each kind of event. */
 function summaryOf(row: EventRow): { summary: string; message: string | null } {
   const d = row.details;
@@ -35,11 +40,11 @@ function summaryOf(row: EventRow): { summary: string; message: string | null } {
     case 'sheet.reopened':
       return { summary: `Edited the approved sheet: revision ${revision} started as a draft`, message: null };
     case 'note.created':
-      return { summary: `${d.reply === true ? 'Replied to a note' : 'Wrote a note'} on cell ${text(d.cellId) ?? '?'}`, message: text(d.body) };
+      return { summary: `${d.reply === true ? 'Replied to a note' : 'Wrote a note'} on ${cellWords(d)}`, message: text(d.body) };
     case 'note.resolved':
-      return { summary: `Resolved the note on cell ${text(d.cellId) ?? '?'}`, message: null };
+      return { summary: `Resolved the note on ${cellWords(d)}`, message: null };
     case 'note.reopened':
-      return { summary: `Reopened the note on cell ${text(d.cellId) ?? '?'}`, message: null };
+      return { summary: `Reopened the note on ${cellWords(d)}`, message: null };
   }
 }
 

@@ -105,7 +105,7 @@ export interface CreatedNote {
 
 /**
  * Writes a note on a cell (a new thread), or a reply to a thread (`parentId`, on the thread's
- * cell). The cell must be one of the sheet's cells now (`cellIds`, from its live content); the
+ * cell). The cell must be one of the sheet's cells now (`cells`: id to name, from its live content); the
  * note records the revision the sheet is at. A reply leaves the thread's state as it is:
  * reopening is an explicit step.
  */
@@ -114,7 +114,7 @@ export async function createNote(
   sheetId: string,
   author: { userId: string; ip?: string | null },
   input: { cellId: string; body: string; parentId?: string },
-  cellIds: ReadonlySet<string>,
+  cells: ReadonlyMap<string, string | null>,
 ): Promise<CreatedNote> {
   return dataSource.transaction(async (manager) => {
     const sheet = await lockWorkflowRow(manager, sheetId);
@@ -128,7 +128,7 @@ export async function createNote(
       if (parent === undefined) throw invalidField('parentId', 'no note with this id on this sheet');
       rootId = parent.parent_id ?? parent.id;
       if (parent.cell_id !== input.cellId) throw invalidField('cellId', `a reply belongs to the cell of its thread (${parent.cell_id})`);
-    } else if (!cellIds.has(input.cellId)) {
+    } else if (!cells.has(input.cellId)) {
       throw invalidField('cellId', `the sheet has no cell with id "${input.cellId}"`);
     }
     const members: Mentionable[] = await manager.query(
@@ -149,7 +149,16 @@ export async function createNote(
       organizationId: sheet.organization_id,
       subject: sheetId,
       ip: author.ip,
-      details: { sheetId, noteId, threadId: rootId ?? noteId, cellId: input.cellId, revision, reply: rootId !== null, body: input.body.slice(0, 500) },
+      details: {
+        sheetId,
+        noteId,
+        threadId: rootId ?? noteId,
+        cellId: input.cellId,
+        cellName: cells.get(input.cellId) ?? null,
+        revision,
+        reply: rootId !== null,
+        body: input.body.slice(0, 500),
+      },
     });
     const thread = await threadById(manager, sheetId, rootId ?? noteId);
     const note = rootId === null ? thread : (thread.replies.find((reply) => reply.id === noteId) as ApiNote);
@@ -185,8 +194,18 @@ export async function setThreadResolved(
       organizationId: sheet.organization_id,
       subject: sheetId,
       ip: actor.ip,
-      details: { sheetId, noteId, threadId: noteId, cellId: root.cell_id, revision: currentRevisionOf(sheet) },
+      details: { sheetId, noteId, threadId: noteId, cellId: root.cell_id, cellName: await cellNameOf(manager, sheetId, root.cell_id), revision: currentRevisionOf(sheet) },
     });
     return threadById(manager, sheetId, noteId);
   });
+}
+
+/** The name of a cell in the sheet's stored content, for the history's words; null for a note cell or one since removed. */
+async function cellNameOf(manager: EntityManager, sheetId: string, cellId: string): Promise<string | null> {
+  const rows: Array<{ name: string | null }> = await manager.query(
+    `SELECT cell ->> 'name' AS name FROM sheets, jsonb_array_elements(content -> 'cells') AS cell
+      WHERE sheets.id = $1 AND cell ->> 'id' = $2 LIMIT 1`,
+    [sheetId, cellId],
+  );
+  return rows[0]?.name ?? null;
 }
