@@ -161,11 +161,10 @@ export function createEvaluator(sheet: SheetInput, options: EvaluatorOptions = {
       if (name === null) continue;
       for (const e of entries) if (e.node.name === name) seeds.add(e.node.id);
     }
-    const dirty = downstream(graph, seeds);
-    // Cells that depended on the old version (a renamed or removed name, a broken cycle).
-    for (const id of downstream(before, changed)) if (index.has(id)) dirty.add(id);
-    for (const id of [...dirty]) for (const d of downstream(graph, [id])) dirty.add(d);
-    return dirty;
+    // Cells that depended on the old version (a renamed or removed name, a broken cycle), and
+    // everything downstream of them and of the seeds in the new graph.
+    for (const id of downstream(before, changed)) if (index.has(id)) seeds.add(id);
+    return downstream(graph, seeds);
   }
 
   function rebuild(): SheetGraph {
