@@ -2,8 +2,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createEvaluator, machineOutput } from '@sheaf/engine';
 import { evaluateWithFrozenMaterials, freezeMaterials, materialIdsOf } from '../src/services/freezeMaterials';
 import { materialsLookupFor } from '../src/services/materials';
+import { approveSheet } from '../src/services/review/approveSheet';
+import { submitForCheck } from '../src/services/review/workflowTransitions';
+import { createSheet } from '../src/services/sheets';
 import { createTeam, signedInClient, type Team } from './helpers/fixtures';
 import type { TestClient } from './helpers/TestClient';
+import type { RevisionDetail } from '@sheaf/engine/api';
 import { startTestServer, type TestServer } from './helpers/testServer';
 
 const hubIron = (sut: string) => ({
@@ -81,5 +85,47 @@ describe('frozen material values of a revision', () => {
     const [sA, sB] = [centre + radius, centre - radius];
     expect(atIssue.cells.BCM?.values?.factor).toBeCloseTo(1 / (sA / 210 - sB / 760), 9);
     expect(liveOutput.cells.BCM?.values?.factor).toBeCloseTo(1 / (sA / 150 - sB / 760), 9);
+  });
+
+  it('an approved revision keeps its frozen material values and results after the library is edited', async () => {
+    const made = await engineer.post(`/api/orgs/${team.organizationId}/materials`, { id: 'hub-iron-rev', ...hubIron('220 MPa') });
+    expect(made.status).toBe(201);
+    const revisionContent = {
+      ...content,
+      cells: content.cells.filter((c) => c.id !== 'c4').map((c) => (c.material === 'hub-iron-demo' ? { ...c, material: 'hub-iron-rev' } : c)),
+    };
+    const sheet = await createSheet(server.deps.dataSource, team.project, { title: 'Pulley hub, issued', content: revisionContent, createdByUserId: team.users.engineer.id });
+    await submitForCheck(server.deps.dataSource, undefined, sheet.id, { userId: team.users.engineer.id }, { checkerUserId: team.users.checker.id });
+    await approveSheet(server.deps.dataSource, undefined, sheet.id, { userId: team.users.checker.id }, {});
+
+    const viewer = await signedInClient(server, team.users.viewer);
+    const issued: RevisionDetail = (await viewer.get(`/api/sheets/${sheet.id}/revisions/1`)).body.revision;
+    expect(issued.materials?.['hub-iron-rev']?.properties.Sut?.value).toBe('220 MPa');
+    expect(issued.materials?.['hub-iron-rev']?.properties.Sut?.source).toBe('Demo foundry test bars, invented');
+    expect(Object.keys(issued.materials ?? {}).sort()).toEqual(['astm-a36', 'hub-iron-rev']);
+    const factorAtIssue = issued.results.cells.BCM?.values?.factor as number;
+    // Brittle Coulomb-Mohr with Sut = 220 MPa, Suc = 760 MPa (Shigley 9th ed., eq. 5-31, from memory).
+    const centre = (-30 + 55) / 2;
+    const radius = Math.hypot((-30 - 55) / 2, 20);
+    expect(factorAtIssue).toBeCloseTo(1 / ((centre + radius) / 220 - (centre - radius) / 760), 9);
+
+    const edit = await engineer.request('PUT', `/api/orgs/${team.organizationId}/materials/hub-iron-rev`, { body: hubIron('120 MPa') });
+    expect(edit.status).toBe(200);
+
+    const later: RevisionDetail = (await viewer.get(`/api/sheets/${sheet.id}/revisions/1`)).body.revision;
+    expect(later.results).toEqual(issued.results);
+    expect(later.materials).toEqual(issued.materials);
+    // Evaluating the stored content again with its frozen values gives the stored results.
+    expect(evaluateWithFrozenMaterials(later.content, later.materials ?? {})).toEqual(later.results);
+    // The sheet as it is now uses the edited library: the diff against revision 1 shows the factor moved.
+    const diff = await viewer.get(`/api/sheets/${sheet.id}/diff?from=1&to=current`);
+    expect(diff.status).toBe(200);
+    const moved = (diff.body.diff.results as { cellName: string; key: string | null; old: { si: number | null } | null; new: { si: number | null } | null }[])
+      .filter((r) => r.cellName === 'BCM' && r.key === 'factor');
+    expect(moved).toHaveLength(1);
+    expect(moved[0]!.old?.si).toBeCloseTo(factorAtIssue, 6);
+    expect(moved[0]!.new?.si).toBeCloseTo(1 / ((centre + radius) / 120 - (centre - radius) / 760), 6);
+    // No input of the sheet changed: only the library did.
+    expect(diff.body.diff.changed).toEqual([]);
   });
 });

@@ -211,7 +211,7 @@ describe('templates', () => {
     const sheetId = await approvedSheet(server.deps.dataSource, team);
     const revision = await viewer.get(`/api/sheets/${sheetId}/revisions/1`);
     expect(revision.status).toBe(200);
-    const res = await engineer.post(`/api/sheets/${sheetId}/revisions/1/templates`, {
+    const res = await engineer.post(`/api/sheets/${sheetId}/templates/from-revision/1`, {
       title: 'Lug at the weld toe, approved',
       description: 'From revision 1 as approved.',
       category: 'Lifting gear',
@@ -222,7 +222,7 @@ describe('templates', () => {
     expect(template.versions[0]).toMatchObject({ version: 1, sourceSheetId: sheetId, sourceRevisionId: expect.any(String) });
     const revisionCells = revision.body.revision.content.cells.map((c: { id: string }) => c.id);
     expect(template.content.cells.map((c) => c.id)).toEqual(revisionCells);
-    const missing = await engineer.post(`/api/sheets/${sheetId}/revisions/9/templates`, { title: 'x', description: '', category: 'y', parameters: [] });
+    const missing = await engineer.post(`/api/sheets/${sheetId}/templates/from-revision/9`, { title: 'x', description: '', category: 'y', parameters: [] });
     expect(missing.status).toBe(404);
   });
 });

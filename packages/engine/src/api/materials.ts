@@ -14,6 +14,13 @@ export const LibraryMaterial = materialRecordSchema
   .meta({ id: 'LibraryMaterial', description: 'A material with a basis and a published source for each value' });
 export type LibraryMaterial = z.infer<typeof LibraryMaterial>;
 
+/**
+ * Material values frozen into an issued revision: for each material id its sheet names, the
+ * material as it was at approval. The revision is evaluated with these, never the live library.
+ */
+export const FrozenMaterials = z.record(z.string(), LibraryMaterial).meta({ id: 'FrozenMaterials' });
+export type FrozenMaterials = z.infer<typeof FrozenMaterials>;
+
 export const MaterialListResponse = z.object({ materials: z.array(LibraryMaterial) }).meta({ id: 'MaterialListResponse' });
 export type MaterialListResponse = z.infer<typeof MaterialListResponse>;
 

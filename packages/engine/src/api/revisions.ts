@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { Id, Timestamp } from './common';
+import { FrozenMaterials } from './materials';
 import { Person, ReviewState, Signature } from './review';
 import { SheetContentV1 } from './sheets';
 
@@ -43,7 +44,12 @@ export const RevisionSummary = z
   .meta({ id: 'RevisionSummary' });
 export type RevisionSummary = z.infer<typeof RevisionSummary>;
 
-export const RevisionDetail = RevisionSummary.extend({ content: SheetContentV1, results: MachineOutputSchema }).meta({
+export const RevisionDetail = RevisionSummary.extend({
+  content: SheetContentV1,
+  results: MachineOutputSchema,
+  /** The library materials it used, as frozen at approval (values, bases, sources). */
+  materials: FrozenMaterials.optional(),
+}).meta({
   id: 'RevisionDetail',
 });
 export type RevisionDetail = z.infer<typeof RevisionDetail>;

@@ -1,6 +1,7 @@
 import type { SheetContentV1 } from '@sheaf/engine/api';
 import type { MachineOutput } from '@sheaf/engine';
 import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import type { FrozenMaterials } from '@sheaf/engine/api';
 
 /**
  * An issued revision of a sheet: written once at approval, never changed (a database trigger
@@ -36,6 +37,10 @@ export class Revision {
   /** The engine's machine output of `content`, computed on the server at approval. */
   @Column({ type: 'jsonb' })
   results: MachineOutput;
+
+  /** The library materials `content` names, with their values, bases and sources as at approval (`freezeMaterials`). */
+  @Column({ name: 'frozen_materials', type: 'jsonb', default: {} })
+  frozenMaterials: FrozenMaterials;
 
   /** Hex sha-256 of the canonical JSON of `content` (keys sorted, no spaces). */
   @Column({ name: 'content_sha256', type: 'char', length: 64 })

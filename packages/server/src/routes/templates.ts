@@ -106,7 +106,7 @@ export function templateRoutes(): Route[] {
     defineRoute({
       id: 'templates.createFromRevision',
       method: 'post',
-      path: '/api/sheets/:sheetId/revisions/:number/templates',
+      path: '/api/sheets/:sheetId/templates/from-revision/:number',
       summary: "Save an approved revision's content as a new template of its organization, naming the quantity cells that are parameters",
       tag: 'templates',
       access: { kind: 'permission', action: 'template.write', resolve: sheetFromParams },

@@ -1,14 +1,14 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { createEvaluator, machineOutput, materialsLookupOf, type MachineOutput, type MaterialsLookup } from '@sheaf/engine';
-import type { LibraryMaterial } from '@sheaf/engine/api';
+import type { FrozenMaterials } from '@sheaf/engine/api';
 import { listMaterials } from './materials';
 
 /**
- * Material values frozen into an issued revision: for each material id the sheet names, the
- * values with their basis and source as they were at issue. Stored with the revision, they make
- * its evaluation independent of later edits of the materials library.
+ * Material values frozen into an issued revision (`FrozenMaterials` of the API): for each
+ * material id the sheet names, the values with their basis and source as they were at issue.
+ * Stored with the revision, they make its evaluation independent of later edits of the library.
  */
-export type FrozenMaterials = Record<string, LibraryMaterial>;
+export type { FrozenMaterials };
 
 interface ContentWithCells {
   readonly cells: readonly { readonly kind: string; readonly [field: string]: unknown }[];

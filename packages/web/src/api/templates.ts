@@ -93,12 +93,12 @@ export function useSaveTemplateVersion(organizationId: string) {
   });
 }
 
-/** POST /api/sheets/:sheetId/revisions/:number/templates: an approved revision's content as a new template. */
+/** POST /api/sheets/:sheetId/templates/from-revision/:number: an approved revision's content as a new template. */
 export function useSaveRevisionAsTemplate(sheetId: string, revisionNumber: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: CreateTemplateRequest) =>
-      apiRequest<TemplateResponse>(`/api/sheets/${encodeURIComponent(sheetId)}/revisions/${revisionNumber}/templates`, {
+      apiRequest<TemplateResponse>(`/api/sheets/${encodeURIComponent(sheetId)}/templates/from-revision/${revisionNumber}`, {
         method: 'POST',
         body: input,
       }).then((r): TemplateDetail => r.template),

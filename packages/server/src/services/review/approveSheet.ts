@@ -3,6 +3,7 @@ import type { Person } from '@sheaf/engine/api';
 import type { CollabServer } from '../../collab/CollabServer';
 import { conflict } from '../../http/ApiError';
 import { recordAudit } from '../audit';
+import { freezeMaterials, frozenMaterialsLookup } from '../freezeMaterials';
 import { contentSha256 } from './canonicalContent';
 import { liveSheetContent } from './liveContent';
 import { countOpenThreads } from './notes';
@@ -35,7 +36,11 @@ export async function approveSheet(
   // The content is read before the transaction; it cannot change meanwhile because a sheet in
   // check takes no edits (the status is checked again under the row lock below).
   const live = await liveSheetContent(dataSource, collab, sheetId);
-  const { content, results } = evaluateOnServer(live);
+  // The library values the sheet uses are frozen into the revision and it is evaluated with
+  // exactly those, so a later edit of the library never changes what was approved.
+  const organizationId = await organizationOfSheet(dataSource, sheetId);
+  const frozen = Array.isArray(live.cells) ? await freezeMaterials(dataSource, live, organizationId) : {};
+  const { content, results } = evaluateOnServer(live, frozenMaterialsLookup(frozen));
   const sha256 = contentSha256(content);
 
   const outcome = await dataSource.transaction(async (manager) => {
@@ -59,8 +64,8 @@ export async function approveSheet(
                               prepared_by_user_id, prepared_by_name, prepared_at,
                               checked_by_user_id, checked_by_name, checked_at,
                               approved_by_user_id, approved_by_name, approved_at,
-                              override_reason, open_notes_at_approval)
-       VALUES ($1, $2, $3, $4, $5, $6::jsonb, $7::jsonb, $8, $9, $10, $11, $12, $13, now(), $12, $13, now(), $14, $15)`,
+                              override_reason, open_notes_at_approval, frozen_materials)
+       VALUES ($1, $2, $3, $4, $5, $6::jsonb, $7::jsonb, $8, $9, $10, $11, $12, $13, now(), $12, $13, now(), $14, $15, $16::jsonb)`,
       [
         sheetId,
         row.organization_id,
@@ -77,6 +82,7 @@ export async function approveSheet(
         approver.name,
         openThreads > 0 ? (input.overrideReason ?? null) : null,
         openThreads,
+        JSON.stringify(frozen),
       ],
     );
     const [updated] = (await manager.query(
@@ -104,4 +110,11 @@ export async function approveSheet(
   // Approved sheets take edits again: the first one starts the next revision as a draft.
   await collab?.setSheetLocked(sheetId, false);
   return outcome;
+}
+
+async function organizationOfSheet(dataSource: DataSource, sheetId: string): Promise<string> {
+  const rows: { organization_id: string }[] = await dataSource.query(`SELECT organization_id FROM sheets WHERE id = $1`, [sheetId]);
+  const row = rows[0];
+  if (!row) throw conflict('the sheet was deleted while being approved');
+  return row.organization_id;
 }

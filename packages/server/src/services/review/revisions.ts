@@ -1,8 +1,9 @@
 import type { DataSource } from 'typeorm';
 import { diffRevisions, type MachineOutput, type RevisionSnapshot } from '@sheaf/engine';
-import type { RevisionDetail, RevisionDiffResponse, RevisionSummary, SheetContentV1 } from '@sheaf/engine/api';
+import type { FrozenMaterials, RevisionDetail, RevisionDiffResponse, RevisionSummary, SheetContentV1 } from '@sheaf/engine/api';
 import type { CollabServer } from '../../collab/CollabServer';
 import { notFound } from '../../http/ApiError';
+import { materialsLookupFor } from '../materials';
 import { liveSheetContent } from './liveContent';
 import { evaluateOnServer } from './serverResults';
 import { currentRevisionOf, type WorkflowRow } from './workflowRow';
@@ -57,13 +58,13 @@ export async function listRevisions(dataSource: DataSource, sheetId: string): Pr
 
 /** One issued revision with its content and results; 404 when the sheet has no such revision. */
 export async function revisionDetail(dataSource: DataSource, sheetId: string, number: number): Promise<RevisionDetail> {
-  const rows: Array<RevisionRow & { content: SheetContentV1; results: MachineOutput }> = await dataSource.query(
-    `SELECT ${SUMMARY_COLUMNS}, content, results FROM revisions r WHERE r.sheet_id = $1 AND r.number = $2`,
+  const rows: Array<RevisionRow & { content: SheetContentV1; results: MachineOutput; frozen_materials: FrozenMaterials }> = await dataSource.query(
+    `SELECT ${SUMMARY_COLUMNS}, content, results, frozen_materials FROM revisions r WHERE r.sheet_id = $1 AND r.number = $2`,
     [sheetId, number],
   );
   const row = rows[0];
   if (row === undefined) throw notFound(`revision ${number}`);
-  return { ...toSummary(row), content: row.content, results: row.results as RevisionDetail['results'] };
+  return { ...toSummary(row), content: row.content, results: row.results as RevisionDetail['results'], materials: row.frozen_materials };
 }
 
 /**
@@ -81,7 +82,10 @@ export async function revisionDiff(
   let newerSnapshot: RevisionSnapshot;
   let newer: RevisionSummary | null = null;
   if (to === 'current') {
-    const { content, results } = evaluateOnServer(await liveSheetContent(dataSource, collab, sheet.id));
+    // The sheet as it is now is evaluated with the organization's library as it is now.
+    const owner: { organization_id: string }[] = await dataSource.query(`SELECT organization_id FROM sheets WHERE id = $1`, [sheet.id]);
+    const materials = owner[0] ? await materialsLookupFor(dataSource, owner[0].organization_id) : undefined;
+    const { content, results } = evaluateOnServer(await liveSheetContent(dataSource, collab, sheet.id), materials);
     newerSnapshot = { number: currentRevisionOf(sheet), content, results };
   } else {
     const detail = await revisionDetail(dataSource, sheet.id, to);
@@ -94,6 +98,6 @@ export async function revisionDiff(
 }
 
 function stripDetail(detail: RevisionDetail): RevisionSummary {
-  const { content: _content, results: _results, ...summary } = detail;
+  const { content: _content, results: _results, materials: _materials, ...summary } = detail;
   return summary;
 }

@@ -13,8 +13,9 @@ export interface EvaluatedContent {
  * Results are never taken from a client: whatever a browser computed or sent, a revision holds
  * what the engine says here. Content the reader refuses cannot be issued: 409 naming each field.
  *
- * TODO(issue 6): pass the organization's materials once they are stored, so cells that name a
- * material evaluate; today such cells are issued with their `unknown-material` error value.
+ * `materials`: for an issued revision its frozen materials (`frozenMaterialsLookup`), for the
+ * sheet as it is now the organization's library (`materialsLookupFor`); cells that name a
+ * material not in it get their `unknown-material` error value.
  */
 export function evaluateOnServer(content: unknown, materials?: MaterialsLookup): EvaluatedContent {
   const read = readSheet(content);
