@@ -5,6 +5,7 @@ import { useSheet } from '../api/sheets';
 import { Loading } from '../components/Loading';
 import { Paper } from '../components/Paper';
 import { TitleBlock } from '../components/TitleBlock';
+import { OpenNotesProvider } from '../features/review/OpenNotesContext';
 import { ReviewHeaderActions } from '../features/review/ReviewHeaderActions';
 import { SheetNotesColumn } from '../features/review/SheetNotesColumn';
 import { useTitleBlockSignatures } from '../features/review/useTitleBlockSignatures';
@@ -42,18 +43,20 @@ export function SheetPage() {
       <ReviewHeaderActions sheet={sheet} role={role} />
       <SheetTemplateBar sheet={sheet} role={role} />
       {owner ? <SheetActions sheet={sheet} membership={{ ...owner, role }} /> : null}
-      <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_19rem]">
-        <div ref={cellsRef} className="min-w-0">
-          {/* A sheet in check is read-only for everyone; a change of status reloads the live copy. */}
-          <LiveSheet
-            key={`${sheet.id}:${sheet.status}`}
-            sheet={sheet}
-            role={sheet.status === 'in-check' ? 'viewer' : role}
-            selfName={me.data?.user.name ?? 'You'}
-          />
+      <OpenNotesProvider sheetId={sheet.id}>
+        <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_19rem]">
+          <div ref={cellsRef} className="min-w-0">
+            {/* A sheet in check is read-only for everyone; a change of status reloads the live copy. */}
+            <LiveSheet
+              key={`${sheet.id}:${sheet.status}`}
+              sheet={sheet}
+              role={sheet.status === 'in-check' ? 'viewer' : role}
+              selfName={me.data?.user.name ?? 'You'}
+            />
+          </div>
+          <SheetNotesColumn sheet={sheet} cellsRef={cellsRef} />
         </div>
-        <SheetNotesColumn sheet={sheet} cellsRef={cellsRef} />
-      </div>
+      </OpenNotesProvider>
     </Paper>
   );
 }

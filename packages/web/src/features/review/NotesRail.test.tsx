@@ -4,6 +4,7 @@ import type { NoteThread } from '@sheaf/engine/api';
 import { meAs } from '../../test/fixtures';
 import { mockFetch } from '../../test/mockFetch';
 import { CellNoteBadge } from './CellNoteBadge';
+import { CellOpenNotesBadge, OpenNotesProvider } from './OpenNotesContext';
 import { NotesRail } from './NotesRail';
 import { alice, bruno, carla, renderWithClient, reviewState, SHEET_ID } from './reviewTestKit';
 import { useOpenNotesByCell } from './useOpenNotesByCell';
@@ -153,5 +154,24 @@ describe('useOpenNotesByCell and CellNoteBadge', () => {
     expect(badge.querySelector('svg')).toBeTruthy();
     expect(screen.getByRole('link', { name: '1 open note on 2. S' })).toBeTruthy();
     expect(screen.getAllByRole('link')).toHaveLength(2);
+  });
+});
+
+describe('OpenNotesProvider', () => {
+  it('gives each cell inside it its badge, and nothing outside it', async () => {
+    mockFetch({ [`GET /api/sheets/${SHEET_ID}/notes`]: { body: { threads: [thread(ID(1), 'c1', 'a')] } } });
+    renderWithClient(
+      <>
+        <OpenNotesProvider sheetId={SHEET_ID}>
+          <p>
+            <CellOpenNotesBadge cellId="c1" cellLabel="DE" />
+            <CellOpenNotesBadge cellId="q1" cellLabel="P" />
+          </p>
+        </OpenNotesProvider>
+        <CellOpenNotesBadge cellId="c1" cellLabel="DE outside" />
+      </>,
+    );
+    expect(await screen.findByRole('link', { name: '1 open note on DE' })).toBeTruthy();
+    expect(screen.getAllByRole('link')).toHaveLength(1);
   });
 });

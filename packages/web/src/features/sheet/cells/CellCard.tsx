@@ -8,6 +8,7 @@ import { useCellResult } from '../hooks/useCellResult';
 import { useCellSummary } from '../hooks/useCellSummary';
 import { useSheetEditor } from '../hooks/useSheetEditor';
 import { useSheetSettings } from '../hooks/useSheetSettings';
+import { CellOpenNotesBadge } from '../../review/OpenNotesContext';
 import { KIND_VIEWS } from '../kinds/kindViews';
 import { CellOutcome } from '../results/CellOutcome';
 import { AddCellMenu } from './AddCellMenu';
@@ -130,6 +131,7 @@ export const CellCard = memo(function CellCard(props: CellCardProps) {
               describedBy={errorId}
             />
           ) : null}
+          <CellOpenNotesBadge cellId={id} cellLabel={title} />
           {peers.length > 0 ? (
             <span className="text-[0.75rem]" data-peers>
               {peers.map((peer) => (
