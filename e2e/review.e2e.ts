@@ -111,6 +111,10 @@ describe('check and approval', () => {
     await sNotes.getByRole('button', { name: 'Add note' }).click();
     await expect.poll(() => sNotes.getByRole('article').count()).toBe(1);
     await expect.poll(() => header(checker).innerText()).toContain('1 open note');
+    // The cell carries the open-note badge, which leads to its notes in the rail.
+    const badge = checker.locator('[data-cell-id="s1"] a[href="#notes-s1"]');
+    await expect.poll(() => badge.count()).toBe(1);
+    expect(await badge.getAttribute('title')).toMatch(/^1 open note on /);
     await screenshot(checker, 'review-notes-rail');
     await header(checker).getByRole('button', { name: 'Return to preparer…' }).click();
     await checker.getByLabel('What should be fixed').fill('Use the lever arm from the drawing and answer the note on S.');
@@ -136,6 +140,7 @@ describe('check and approval', () => {
     await open(checker, sheetId);
     await checker.getByRole('region', { name: /^Notes on .*S/ }).getByRole('button', { name: 'Resolve' }).click();
     await expect.poll(() => header(checker).innerText()).not.toContain('open note');
+    await expect.poll(() => checker.locator('[data-cell-id="s1"] a[href="#notes-s1"]').count()).toBe(0);
     await header(checker).getByRole('button', { name: 'Approve…' }).click();
     await screenshot(checker, 'review-check-actions');
     await checker.getByRole('button', { name: 'Approve revision 1' }).click();
