@@ -3,6 +3,8 @@ import { useMemo } from 'react';
 import { can, type Role, type SheetDetail } from '../../api/types';
 import { isConnectionUsable } from '../../collab/connectionState';
 import { useSheetDoc } from '../../collab/useSheetDoc';
+import { useProjectOrganization } from '../../hooks/useProjectOrganization';
+import { useMaterialsLookup } from '../materials/useMaterialsLookup';
 import { ConnectionBanner } from './ConnectionBanner';
 import { SheetEditor } from './SheetEditor';
 
@@ -15,6 +17,8 @@ import { SheetEditor } from './SheetEditor';
  */
 export function LiveSheet({ sheet, role, selfName }: { sheet: SheetDetail; role: Role; selfName: string }) {
   const handle = useSheetDoc(sheet.id);
+  const owner = useProjectOrganization(sheet.projectId);
+  const materials = useMaterialsLookup(owner?.organization.id ?? '');
   const saved = useMemo(() => docFromSheetContent(sheet.content as SheetFileContent), [sheet.content]);
   const canEdit = can(role, 'sheet.edit');
   const live = handle.synced && handle.doc !== null;
@@ -31,6 +35,8 @@ export function LiveSheet({ sheet, role, selfName }: { sheet: SheetDetail; role:
         readOnly={readOnly}
         selfName={selfName}
         fileStem={sheet.calcNumber || sheet.title}
+        organizationId={owner?.organization.id ?? null}
+        materials={materials}
       />
     </div>
   );

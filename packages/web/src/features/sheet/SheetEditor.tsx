@@ -1,7 +1,7 @@
 import 'katex/dist/katex.min.css';
 import './sheetEditor.css';
-import type { KindId } from '@sheaf/engine';
-import { useCallback, useMemo, useState, type FocusEvent, type KeyboardEvent } from 'react';
+import type { KindId, MaterialsLookup } from '@sheaf/engine';
+import { useCallback, useEffect, useMemo, useState, type FocusEvent, type KeyboardEvent } from 'react';
 import type { Awareness } from 'y-protocols/awareness';
 import type * as Y from 'yjs';
 import { CELL_FIELD, type PresencePeer } from '../../collab/presence';
@@ -30,6 +30,10 @@ export interface SheetEditorProps {
   selfName: string;
   /** What an exported file is named after (the calc number). */
   fileStem: string;
+  /** The sheet's organization, whose materials library the material pickers offer. */
+  organizationId?: string | null;
+  /** The materials cells that name a material are evaluated with (the organization's library). */
+  materials?: MaterialsLookup;
 }
 
 const noPeers: readonly PresencePeer[] = [];
@@ -39,8 +43,9 @@ const noPeers: readonly PresencePeer[] = [];
  * document. Results follow every keystroke (here or anyone's) through the engine's incremental
  * evaluation; nothing waits for the server.
  */
-export function SheetEditor({ doc, awareness, readOnly, selfName, fileStem }: SheetEditorProps) {
+export function SheetEditor({ doc, awareness, readOnly, selfName, fileStem, organizationId = null, materials }: SheetEditorProps) {
   const store = useEvaluator(doc);
+  useEffect(() => store.setMaterials(materials), [store, materials]);
   const ids = useCellOrder(doc);
   const summary = useCellSummary(store);
   const peers = usePeers(awareness);
@@ -50,8 +55,8 @@ export function SheetEditor({ doc, awareness, readOnly, selfName, fileStem }: Sh
   const [undoNotice, setUndoNotice] = useState<string | null>(null);
 
   const context = useMemo<SheetEditorContextValue>(
-    () => ({ doc, store, awareness, readOnly, completion }),
-    [doc, store, awareness, readOnly, completion],
+    () => ({ doc, store, awareness, readOnly, completion, organizationId }),
+    [doc, store, awareness, readOnly, completion, organizationId],
   );
 
   const show = useCallback((id: string) => {

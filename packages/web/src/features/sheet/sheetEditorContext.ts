@@ -14,6 +14,8 @@ export interface SheetEditorContextValue {
   readOnly: boolean;
   /** Live view of the sheet for expression completion. */
   completion: CompletionSheet;
+  /** The organization whose materials library the sheet's cells pick from; null while unknown. */
+  organizationId?: string | null;
 }
 
 export const SheetEditorContext = createContext<SheetEditorContextValue | null>(null);

@@ -1,4 +1,4 @@
-import { createEvaluator, type CellResult, type Evaluator, type UnitSystemId } from '@sheaf/engine';
+import { createEvaluator, type CellResult, type Evaluator, type MaterialsLookup, type UnitSystemId } from '@sheaf/engine';
 import { cellFromDoc, sheetCells, sheetOrder } from '@sheaf/sheet-doc';
 import type * as Y from 'yjs';
 import { orderedCellIds } from '../doc/cellOrder';
@@ -32,6 +32,11 @@ export interface SheetEvaluatorStore {
   /** Ids evaluated by the last pass, in evaluation order (diagnostics and tests). */
   lastEvaluated(): readonly string[];
   readonly evaluator: Evaluator;
+  /**
+   * Give the organization's materials library (or a revision's frozen materials); the cells that
+   * name a material, and their dependents, are evaluated again.
+   */
+  setMaterials(materials: MaterialsLookup | undefined): void;
   /** Stop observing the document, whoever is still subscribed. */
   destroy(): void;
 }
@@ -67,6 +72,7 @@ export function createSheetEvaluatorStore(doc: Y.Doc): SheetEvaluatorStore {
   let summaryStale = true;
   let lastEvaluated: readonly string[] = [];
   const equations = new WeakMap<CellResult, Map<UnitSystemId, string | null>>();
+  let materials: MaterialsLookup | undefined;
 
   // Collected while a transaction's observers run, applied once after it.
   const touched = new Set<string>();
@@ -213,6 +219,15 @@ export function createSheetEvaluatorStore(doc: Y.Doc): SheetEvaluatorStore {
     },
     version: () => version,
     lastEvaluated: () => lastEvaluated,
+    setMaterials(next) {
+      if (next === materials) return;
+      materials = next;
+      const { evaluated } = evaluator.setMaterials(next);
+      lastEvaluated = evaluated;
+      version++;
+      for (const id of evaluated) for (const listener of cellListeners.get(id) ?? []) listener();
+      for (const listener of listeners) listener();
+    },
     destroy() {
       if (attachments > 0) stopObserving();
       attachments = 0;

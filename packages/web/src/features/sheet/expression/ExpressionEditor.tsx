@@ -89,6 +89,7 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
       expressionTheme,
       EditorState.readOnly.of(readOnly),
       EditorView.editable.of(!readOnly),
+      EditorView.editorAttributes.of(readOnly ? { 'data-readonly': 'true' } : {}),
       attributes.current.of([]),
       keymap.of(editingKeys),
     ];

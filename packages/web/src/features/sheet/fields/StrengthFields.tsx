@@ -1,6 +1,7 @@
 import { isTheoryId, THEORIES, THEORY_IDS, type StrengthKey } from '@sheaf/engine';
 import type { SheetFileCell } from '@sheaf/sheet-doc';
-import { setTextField } from '../doc/fieldWrites';
+import { MaterialPicker } from '../../materials/MaterialPicker';
+import { deleteField, setPlainField, setTextField } from '../doc/fieldWrites';
 import { usePlainFieldWriter } from '../hooks/usePlainFieldWriter';
 import { useSheetEditor } from '../hooks/useSheetEditor';
 import { ChoiceField } from './ChoiceField';
@@ -33,12 +34,23 @@ export function StrengthFields({
   errorField: string | null;
   errorId?: string;
 }) {
-  const { doc, readOnly } = useSheetEditor();
+  const { doc, readOnly, organizationId } = useSheetEditor();
   const writer = usePlainFieldWriter(doc, cell.id);
   const theory = typeof cell.theory === 'string' ? cell.theory : '';
   const needs = isTheoryId(theory) ? THEORIES[theory].needs : [];
   const strength = (typeof cell.strength === 'object' && cell.strength !== null ? cell.strength : {}) as Record<string, unknown>;
   const material = typeof cell.material === 'string' ? cell.material : null;
+  // A cell takes its strengths either typed in (`strength`) or from a library material, never both.
+  const chooseMaterial = (id: string | undefined) =>
+    doc.transact(() => {
+      if (id === undefined) {
+        deleteField(doc, cell.id, 'material');
+        setPlainField(doc, cell.id, 'strength', {});
+      } else {
+        deleteField(doc, cell.id, 'strength');
+        setTextField(doc, cell.id, 'material', id);
+      }
+    });
 
   return (
     <>
@@ -51,7 +63,21 @@ export function StrengthFields({
         describedBy={errorId}
         onChange={(value) => setTextField(doc, cell.id, 'theory', value)}
       />
-      {material !== null ? (
+      {organizationId ? (
+        <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-x-2">
+          <span className="pt-[5px] text-right text-[0.8125rem] text-ink-muted">material</span>
+          <MaterialPicker
+            organizationId={organizationId}
+            value={material ?? undefined}
+            theory={isTheoryId(theory) ? theory : undefined}
+            label={`material of ${cellName}`}
+            visuallyHiddenLabel
+            disabled={readOnly}
+            onChange={chooseMaterial}
+          />
+        </div>
+      ) : null}
+      {material !== null && !organizationId ? (
         <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-x-2">
           <span className="pt-[5px] text-right text-[0.8125rem] text-ink-muted">material</span>
           <TextValueField
@@ -62,7 +88,7 @@ export function StrengthFields({
             describedBy={errorId}
           />
         </div>
-      ) : (
+      ) : material !== null ? null : (
         needs.map((key) => {
           const words = STRENGTH_WORDS[key];
           const value = strength[key];

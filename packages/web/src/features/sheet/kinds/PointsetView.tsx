@@ -74,7 +74,7 @@ export function PointsetInputs({ cell, cellName, errorField, errorId }: KindView
           Points from upload <span className="font-mono">{source.upload ?? '—'}</span>
         </p>
       )}
-      <div className="grid gap-1 sm:grid-cols-2 sm:gap-x-3">
+      <div className="grid gap-1 @min-[30rem]:grid-cols-2 @min-[30rem]:gap-x-3">
         {COMPONENTS.map(([key, label]) => (
           <ChoiceField
             key={key}

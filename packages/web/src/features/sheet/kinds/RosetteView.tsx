@@ -47,7 +47,7 @@ export function RosetteInputs({ cell, cellName, errorField, errorId }: KindViewP
         onChange={changeLayout}
       />
       {layout === 'angles' && angles ? (
-        <div className="grid gap-1 sm:grid-cols-3 sm:gap-x-3">
+        <div className="grid gap-1 @min-[40rem]:grid-cols-3 @min-[40rem]:gap-x-3">
           {[0, 1, 2].map((index) => (
             <PlainExpressionField
               key={index}
@@ -71,7 +71,7 @@ export function RosetteInputs({ cell, cellName, errorField, errorId }: KindViewP
           ))}
         </div>
       ) : null}
-      <div className="grid gap-1 sm:grid-cols-3 sm:gap-x-3">
+      <div className="grid gap-1 @min-[40rem]:grid-cols-3 @min-[40rem]:gap-x-3">
         {GAUGES.map(({ field, sub, meaning }) => (
           <ExpressionField
             key={field}
@@ -86,7 +86,7 @@ export function RosetteInputs({ cell, cellName, errorField, errorId }: KindViewP
           />
         ))}
       </div>
-      <div className="grid gap-1 sm:grid-cols-3 sm:gap-x-3">
+      <div className="grid gap-1 @min-[40rem]:grid-cols-3 @min-[40rem]:gap-x-3">
         <ExpressionField
           cellId={cell.id}
           field="E"

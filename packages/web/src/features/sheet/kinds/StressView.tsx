@@ -32,7 +32,7 @@ export function StressInputs({ cell, cellName, result, errorField, errorId }: Ki
 
   return (
     <>
-      <div className="grid gap-1 sm:grid-cols-3 sm:gap-x-3">
+      <div className="grid gap-1 @min-[40rem]:grid-cols-3 @min-[40rem]:gap-x-3">
         {fields.map(({ field, symbol, sub, meaning }) => (
           <ExpressionField
             key={field}
