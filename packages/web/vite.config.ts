@@ -33,5 +33,6 @@ export default defineConfig({
     include: ['src/**/*.test.{ts,tsx}'],
     restoreMocks: true,
     setupFiles: ['src/test/setup.ts'],
+    testTimeout: 30_000,
   },
 });
