@@ -17,6 +17,8 @@ export interface MaterialPickerProps {
   disabled?: boolean;
   /** Hide the values-and-sources list under the choice. */
   compact?: boolean;
+  /** Keep the label for assistive technology only (a row label sits beside the picker). */
+  visuallyHiddenLabel?: boolean;
 }
 
 function lacks(material: LibraryMaterial, theory: TheoryId | undefined): string[] {
@@ -30,7 +32,7 @@ function lacks(material: LibraryMaterial, theory: TheoryId | undefined): string[
  * Self-contained: it loads the library itself (one shared request).
  * @example <MaterialPicker organizationId={orgId} value={cell.material} theory={cell.theory} onChange={setMaterial} />
  */
-export function MaterialPicker({ organizationId, value, onChange, theory, label = 'Material', disabled, compact }: MaterialPickerProps) {
+export function MaterialPicker({ organizationId, value, onChange, theory, label = 'Material', disabled, compact, visuallyHiddenLabel }: MaterialPickerProps) {
   const id = useId();
   const materials = useMaterials(organizationId);
   const list = materials.data ?? [];
@@ -43,7 +45,7 @@ export function MaterialPicker({ organizationId, value, onChange, theory, label 
   return (
     <div className="space-y-2">
       <div>
-        <label htmlFor={id} className="mb-1 block font-medium">
+        <label htmlFor={id} className={visuallyHiddenLabel ? 'sr-only' : 'mb-1 block font-medium'}>
           {label}
         </label>
         <select
