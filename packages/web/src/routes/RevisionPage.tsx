@@ -6,6 +6,7 @@ import { Loading } from '../components/Loading';
 import { Paper } from '../components/Paper';
 import { TitleBlock } from '../components/TitleBlock';
 import { NotesRail } from '../features/review/NotesRail';
+import { FrozenMaterialsList } from '../features/materials/FrozenMaterialsList';
 import { RevisionCells } from '../features/review/RevisionCells';
 import { useDocumentTitle } from '../hooks/useDocumentTitle';
 import { useProjectOrganization } from '../hooks/useProjectOrganization';
@@ -68,6 +69,7 @@ export function RevisionPage() {
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <section aria-label={`Cells of revision ${r.number}`}>
           <RevisionCells ref={cells} revision={r} />
+          <FrozenMaterialsList materials={r.materials} />
         </section>
         <NotesRail sheetId={sheetId} cellIds={r.content.cells.map((c) => c.id)} cellLabels={cellLabels} cellsRef={cells} revision={r.number} />
       </div>
