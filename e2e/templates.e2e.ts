@@ -58,6 +58,11 @@ describe('templates and materials', () => {
     expect(body).toMatch(/18 MPa/);
     expect(body).toMatch(/5 mm/);
 
+    // The live sheet evaluates the checks with the library material and shows its values and source.
+    const check = page.locator('#cell-c1');
+    await expect.poll(() => check.innerText(), { timeout: 20_000 }).toMatch(/Pass/);
+    expect(await check.innerText()).toMatch(/655 MPa[\s\S]*Shigley/);
+
     const sheetId = page.url().split('/').pop() as string;
     const api = await page.evaluate(async (id) => (await fetch(`/api/sheets/${id}`)).json(), sheetId);
     expect(api.sheet.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 1 });
