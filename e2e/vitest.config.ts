@@ -10,5 +10,8 @@ export default defineConfig({
     testTimeout: 60_000,
     hookTimeout: 120_000,
     fileParallelism: false,
+    // A page's data arrives over the network and through lazy modules: polls wait for it, and end
+    // as soon as the expected state shows.
+    expect: { poll: { timeout: 20_000, interval: 100 } },
   },
 });
