@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs, type RouteObject } from 'react-router-dom';
 import { isApiError } from './api/ApiError';
 import { meQueryOptions } from './api/auth';
+import { sheetQueryOptions } from './api/sheets';
 import { AppShell } from './components/AppShell';
 import { Loading } from './components/Loading';
 import { PublicLayout } from './components/PublicLayout';
@@ -100,6 +101,11 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                 },
                 {
                   path: 'sheets/:sheetId',
+                  // Ask for the sheet while the page's code loads, not after.
+                  loader: ({ params }) => {
+                    void queryClient.prefetchQuery(sheetQueryOptions(params.sheetId ?? ''));
+                    return null;
+                  },
                   lazy: () =>
                     import('./routes/SheetPage').then((m) => ({ Component: m.SheetPage })),
                 },

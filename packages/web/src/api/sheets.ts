@@ -1,4 +1,4 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from './client';
 import type { SheetContent, SheetDetail, SheetResponse, SheetStatus, SheetSummary } from './types';
 
@@ -47,14 +47,18 @@ export function useProjectSheets(projectId: string) {
   });
 }
 
-/** GET /api/sheets/:sheetId. Errors are thrown to the route's error boundary: no sheet, no page. */
-export function useSheet(sheetId: string) {
-  return useQuery({
+/** GET /api/sheets/:sheetId, as options for useQuery or a route loader's prefetch. */
+export function sheetQueryOptions(sheetId: string) {
+  return queryOptions({
     queryKey: sheetKeys.detail(sheetId),
     queryFn: ({ signal }) =>
       apiRequest<SheetResponse>(`/api/sheets/${encodeURIComponent(sheetId)}`, { signal }),
-    throwOnError: true,
   });
+}
+
+/** GET /api/sheets/:sheetId. Errors are thrown to the route's error boundary: no sheet, no page. */
+export function useSheet(sheetId: string) {
+  return useQuery({ ...sheetQueryOptions(sheetId), throwOnError: true });
 }
 
 export interface NewSheetInput {

@@ -1,6 +1,7 @@
 import { docFromSheetContent, sheetContentFromDoc, type SheetFileContent } from '@sheaf/sheet-doc';
 import { act, fireEvent, render, screen, within } from '@testing-library/react';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { flushQueuedEditors } from './expression/editorQueue';
 import { SheetEditor } from './SheetEditor';
 import { deferSelectionChange } from './testing/deferSelectionChange';
 
@@ -55,18 +56,27 @@ describe('SheetEditor', () => {
     expect(within(cellItem('k4')).getByRole('button', { name: 'Delete S' })).toBeTruthy();
     expect(within(cellItem('k4')).getByRole('button', { name: 'Duplicate S' })).toBeTruthy();
     expect(within(cellItem('k4')).getByRole('button', { name: /Drag to move S/ })).toBeTruthy();
-    expect(cellItem('k4').querySelector('.cm-content')?.getAttribute('contenteditable')).toBe('true');
+    // Fields show their text at once; their editors are built a few per frame.
+    expect(cellItem('k4').querySelector('[data-field="sx"] [data-static-field]')?.textContent).toBe('load / area');
+    act(() => flushQueuedEditors());
+    const sx = cellItem('k4').querySelector('[data-field="sx"] .cm-content');
+    expect(sx?.getAttribute('contenteditable')).toBe('true');
+    expect(sx?.getAttribute('aria-label')).toBe('normal stress on the x face, S');
+    expect(cellItem('k4').querySelector('[data-field="sx"] [data-static-field]')).toBeNull();
   });
 
   it('hides every control and makes every field read-only for checkers and viewers', () => {
     renderEditor(true);
     const region = screen.getByRole('region', { name: 'Cells' });
     expect(within(region).queryByRole('button', { name: /Add cell|Delete|Duplicate|Move|Drag|Insert below|Edit note/ })).toBeNull();
-    const editors = [...region.querySelectorAll('.cm-content')];
-    expect(editors.length).toBeGreaterThan(5);
-    for (const editor of editors) {
-      expect(editor.getAttribute('contenteditable')).toBe('false');
-      expect(editor.getAttribute('aria-readonly')).toBe('true');
+    act(() => flushQueuedEditors());
+    // Nothing to edit, so no editor is built: each field is its text, marked read-only.
+    expect(region.querySelector('.cm-content')).toBeNull();
+    const fields = [...region.querySelectorAll('[data-static-field]')];
+    expect(fields.length).toBeGreaterThan(5);
+    for (const field of fields) {
+      expect(field.getAttribute('aria-readonly')).toBe('true');
+      expect(field.getAttribute('contenteditable')).toBeNull();
     }
     for (const select of region.querySelectorAll('select')) expect((select as HTMLSelectElement).disabled).toBe(true);
   });

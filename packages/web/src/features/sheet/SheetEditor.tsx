@@ -62,7 +62,7 @@ export function SheetEditor({ doc, awareness, readOnly, selfName, fileStem, orga
   const show = useCallback((id: string) => {
     const element = document.getElementById(`cell-${id}`);
     element?.scrollIntoView({ block: 'center', behavior: 'smooth' });
-    element?.querySelector<HTMLElement>('.cm-content')?.focus({ preventScroll: true });
+    element?.querySelector<HTMLElement>('.cm-content, [data-static-field]')?.focus({ preventScroll: true });
   }, []);
 
   const actions = useMemo<CellActions>(
@@ -70,7 +70,9 @@ export function SheetEditor({ doc, awareness, readOnly, selfName, fileStem, orga
       move(id, delta) {
         if (moveCellBy(doc, id, delta)) {
           // The card moved in the list; keep the keyboard where the person was.
-          requestAnimationFrame(() => document.getElementById(`cell-${id}`)?.querySelector<HTMLElement>('.cm-content')?.focus());
+          requestAnimationFrame(() =>
+            document.getElementById(`cell-${id}`)?.querySelector<HTMLElement>('.cm-content, [data-static-field]')?.focus(),
+          );
         }
       },
       duplicate(id) {

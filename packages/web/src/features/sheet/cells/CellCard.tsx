@@ -52,7 +52,9 @@ export const CellCard = memo(function CellCard(props: CellCardProps) {
 
   useEffect(() => {
     if (!focusOnMount || !cell) return;
-    const target = card.current?.querySelector<HTMLElement>('.cm-content[contenteditable="true"], select, textarea, button.btn');
+    const target = card.current?.querySelector<HTMLElement>(
+      '.cm-content[contenteditable="true"], [data-static-field], select, textarea, button.btn',
+    );
     target?.focus();
     onFocused();
   }, [focusOnMount, cell, onFocused]);

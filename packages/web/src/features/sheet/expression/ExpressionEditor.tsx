@@ -2,15 +2,17 @@ import { autocompletion, completionKeymap } from '@codemirror/autocomplete';
 import { defaultKeymap } from '@codemirror/commands';
 import { Annotation, Compartment, EditorState, type Extension } from '@codemirror/state';
 import { EditorView, keymap, placeholder as placeholderText } from '@codemirror/view';
-import { useEffect, useRef } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { yCollab, yUndoManagerKeymap } from 'y-codemirror.next';
 import type { Awareness } from 'y-protocols/awareness';
 import * as Y from 'yjs';
 import { editorAwareness } from '../../../collab/editorAwareness';
+import { queueEditor } from './editorQueue';
 import { expressionCompletionSource, type CompletionSheet } from './expressionCompletion';
 import { expressionTheme } from './expressionTheme';
 import { nameHighlight, setCellNames } from './nameHighlight';
 import { singleLine } from './singleLine';
+import { StaticExpression } from './StaticExpression';
 
 /**
  * Where an editor's text lives: a Y.Text of the document (co-edited character by character,
@@ -53,7 +55,9 @@ const editingKeys = defaultKeymap.filter((binding) => !/^(Shift-)?Alt-Arrow(Up|D
 /**
  * A CodeMirror 6 field for one cell field. Shared fields use y-codemirror.next's `yCollab` with
  * a Y.UndoManager, so Ctrl-Z undoes this person's typing only; CodeMirror's own history is left
- * out on purpose. Read-only editors can be selected and copied but not changed.
+ * out on purpose. Read-only seats get the text without an editor (nothing to edit); writers see
+ * the same text until their editor is built, a few per frame (see `editorQueue`), or at once
+ * when they click or tab into it.
  */
 export function ExpressionEditor(props: ExpressionEditorProps) {
   const { binding, variant, label, readOnly, names = noNames, sheet, placeholder, invalid, describedBy } = props;
@@ -62,9 +66,12 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
   const attributes = useRef(new Compartment());
   const onChange = useRef<(value: string) => void>(() => {});
   const latestNames = useRef(names);
+  const latestValue = useRef('');
   // A field that turns from plain into shared text (its first character typed) gets a new editor;
   // the caret moves over to it.
   const hadFocus = useRef(false);
+  const buildNow = useRef<() => void>(() => {});
+  const [built, setBuilt] = useState<EditorView | null>(null);
 
   const shared = binding.kind === 'shared' ? binding.text : null;
   const awareness = binding.kind === 'shared' ? binding.awareness : null;
@@ -84,7 +91,43 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
   // The editor is built once per binding; later prop changes reach it through effects.
   useEffect(() => {
     const parent = host.current;
-    if (!parent) return;
+    if (!parent || readOnly) return;
+    let created: EditorView | null = null;
+    let undoManager: Y.UndoManager | null = null;
+    const build = (focus: boolean) => {
+      if (created) return;
+      ({ created, undoManager } = buildEditor(parent));
+      view.current = created;
+      setBuilt(created);
+      if (focus || hadFocus.current) {
+        hadFocus.current = false;
+        created.focus();
+        created.dispatch({ selection: { anchor: created.state.doc.length } });
+      }
+    };
+    const cancel = hadFocus.current ? null : queueEditor(() => build(false));
+    if (!cancel) setTimeout(() => build(true), 0);
+    buildNow.current = () => {
+      cancel?.();
+      build(true);
+    };
+    return () => {
+      cancel?.();
+      buildNow.current = () => {};
+      if (created) {
+        hadFocus.current = created.hasFocus;
+        created.destroy();
+      }
+      undoManager?.destroy();
+      view.current = null;
+      setBuilt(null);
+    };
+    // plainValue is the starting text only; later values arrive through the effect below.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [shared, awareness, readOnly, variant, sheet, placeholder, plainUndo]);
+
+  /** The editor itself, with the extensions of its variant and binding. */
+  function buildEditor(parent: HTMLElement): { created: EditorView; undoManager: Y.UndoManager | null } {
     const extensions: Extension[] = [
       expressionTheme,
       EditorState.readOnly.of(readOnly),
@@ -116,7 +159,7 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
       );
       initial = shared.toString();
     } else {
-      initial = plainValue ?? '';
+      initial = latestValue.current;
       extensions.push(
         EditorView.updateListener.of((update) => {
           if (!update.docChanged) return;
@@ -135,24 +178,12 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
       }
     }
     const created = new EditorView({ parent, state: EditorState.create({ doc: initial, extensions }) });
-    view.current = created;
-    if (hadFocus.current) {
-      hadFocus.current = false;
-      created.focus();
-      created.dispatch({ selection: { anchor: created.state.doc.length } });
-    }
-    return () => {
-      hadFocus.current = created.hasFocus;
-      created.destroy();
-      undoManager?.destroy();
-      view.current = null;
-    };
-    // plainValue is the starting text only; later values arrive through the effect below.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [shared, awareness, readOnly, variant, sheet, placeholder, plainUndo]);
+    return { created, undoManager };
+  }
 
   // A plain field changed by someone else (or by an undo): show the new value.
   useEffect(() => {
+    latestValue.current = plainValue ?? '';
     const current = view.current;
     if (!current || plainValue === null) return;
     const text = current.state.doc.toString();
@@ -172,14 +203,31 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
     if (readOnly) aria['aria-readonly'] = 'true';
     if (variant !== 'prose') aria['aria-multiline'] = 'false';
     current.dispatch({ effects: attributes.current.reconfigure(EditorView.contentAttributes.of(aria)) });
-  }, [label, invalid, describedBy, readOnly, variant, shared, awareness, sheet, placeholder, plainUndo]);
+  }, [label, invalid, describedBy, readOnly, variant, built]);
 
+  const text = shared ? shared.toString() : (plainValue ?? '');
+  if (readOnly) {
+    return (
+      <StaticExpression text={text} variant={variant} names={names} label={label} readOnly invalid={invalid} describedBy={describedBy} />
+    );
+  }
+  const ready = built !== null;
   return (
-    <div
-      ref={host}
-      className="expression-editor min-w-0"
-      data-invalid={invalid ? 'true' : undefined}
-      data-variant={variant}
-    />
+    <div className="min-w-0" data-invalid={invalid ? 'true' : undefined} data-variant={variant}>
+      {!ready ? (
+        <StaticExpression
+          text={text}
+          variant={variant}
+          names={names}
+          label={label}
+          readOnly={false}
+          invalid={invalid}
+          describedBy={describedBy}
+          placeholder={placeholder}
+          onActivate={() => buildNow.current()}
+        />
+      ) : null}
+      <div ref={host} className="expression-editor min-w-0" hidden={!ready} />
+    </div>
   );
 }

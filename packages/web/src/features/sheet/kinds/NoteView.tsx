@@ -19,7 +19,7 @@ export function NoteInputs({ cell }: KindViewProps) {
   const open = !readOnly && (editing || source === '');
 
   useEffect(() => {
-    if (editing) box.current?.querySelector<HTMLElement>('.cm-content')?.focus();
+    if (editing) box.current?.querySelector<HTMLElement>('.cm-content, [data-static-field]')?.focus();
   }, [editing]);
 
   if (!open) {
