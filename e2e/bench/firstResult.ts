@@ -6,6 +6,8 @@
 // Signs in as the demo engineer; without a sheet id it takes the organization's first sheet.
 // Each run is a fresh browser context (cold caches for the page's scripts), so the figure
 // includes loading and parsing the editor's code, then evaluating the sheet.
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { chromium, type Page } from 'playwright-core';
 
 const base = (process.argv[2] ?? '').replace(/\/$/, '');
@@ -75,9 +77,10 @@ try {
         return marks?.firstResult !== undefined && marks.live !== undefined;
       }, undefined, { timeout: 60_000 });
     } catch (error) {
-      await page.screenshot({ path: 'firstResult-timeout.png', fullPage: true });
+      const shot = join(tmpdir(), 'firstResult-timeout.png');
+      await page.screenshot({ path: shot, fullPage: true });
       const seen = await page.evaluate(() => (window as unknown as { __sheafMarks?: unknown }).__sheafMarks);
-      throw new Error(`no result within 60 s on ${page.url()} (marks so far: ${JSON.stringify(seen)}; screenshot firstResult-timeout.png)`, { cause: error });
+      throw new Error(`no result within 60 s on ${page.url()} (marks so far: ${JSON.stringify(seen)}; screenshot ${shot})`, { cause: error });
     }
     const marks = await page.evaluate(() => (window as unknown as { __sheafMarks: { firstResult: number; live: number } }).__sheafMarks);
     results.push(marks);
