@@ -55,9 +55,10 @@ const editingKeys = defaultKeymap.filter((binding) => !/^(Shift-)?Alt-Arrow(Up|D
 /**
  * A CodeMirror 6 field for one cell field. Shared fields use y-codemirror.next's `yCollab` with
  * a Y.UndoManager, so Ctrl-Z undoes this person's typing only; CodeMirror's own history is left
- * out on purpose. Read-only seats get the text without an editor (nothing to edit); writers see
- * the same text until their editor is built, a few per frame (see `editorQueue`), or at once
- * when they click or tab into it.
+ * out on purpose. Read-only seats get a read-only editor (`readOnly`, not `editable`) on live
+ * shared fields, where it shows the carets of the people typing, and plain text elsewhere. Every
+ * field shows its text at once; editors are built a few per frame (see `editorQueue`), or at
+ * once when a writer clicks or tabs into the field.
  */
 export function ExpressionEditor(props: ExpressionEditorProps) {
   const { binding, variant, label, readOnly, names = noNames, sheet, placeholder, invalid, describedBy } = props;
@@ -78,6 +79,9 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
   const plainUndo = binding.kind === 'plain' ? binding.undo : undefined;
   const plainValue = binding.kind === 'plain' ? binding.value : null;
   const plainOnChange = binding.kind === 'plain' ? binding.onChange : null;
+  // Read-only seats see others' carets in a live shared field, so they get a read-only editor
+  // there; anywhere else there is nothing an editor would add.
+  const staticOnly = readOnly && !(shared && awareness);
 
   useEffect(() => {
     if (plainOnChange) onChange.current = plainOnChange;
@@ -91,7 +95,7 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
   // The editor is built once per binding; later prop changes reach it through effects.
   useEffect(() => {
     const parent = host.current;
-    if (!parent || readOnly) return;
+    if (!parent || staticOnly) return;
     let created: EditorView | null = null;
     let undoManager: Y.UndoManager | null = null;
     const build = (focus: boolean) => {
@@ -124,7 +128,7 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
     };
     // plainValue is the starting text only; later values arrive through the effect below.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [shared, awareness, readOnly, variant, sheet, placeholder, plainUndo]);
+  }, [shared, awareness, readOnly, staticOnly, variant, sheet, placeholder, plainUndo]);
 
   /** The editor itself, with the extensions of its variant and binding. */
   function buildEditor(parent: HTMLElement): { created: EditorView; undoManager: Y.UndoManager | null } {
@@ -206,7 +210,7 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
   }, [label, invalid, describedBy, readOnly, variant, built]);
 
   const text = shared ? shared.toString() : (plainValue ?? '');
-  if (readOnly) {
+  if (staticOnly) {
     return (
       <StaticExpression text={text} variant={variant} names={names} label={label} readOnly invalid={invalid} describedBy={describedBy} />
     );
@@ -220,11 +224,11 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
           variant={variant}
           names={names}
           label={label}
-          readOnly={false}
+          readOnly={readOnly}
           invalid={invalid}
           describedBy={describedBy}
           placeholder={placeholder}
-          onActivate={() => buildNow.current()}
+          onActivate={readOnly ? undefined : () => buildNow.current()}
         />
       ) : null}
       <div ref={host} className="expression-editor min-w-0" hidden={!ready} />
