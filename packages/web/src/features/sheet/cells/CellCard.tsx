@@ -52,8 +52,9 @@ export const CellCard = memo(function CellCard(props: CellCardProps) {
 
   useEffect(() => {
     if (!focusOnMount || !cell) return;
+    // The first input of the cell's body (its name keeps the name it was given).
     const target = card.current?.querySelector<HTMLElement>(
-      '.cm-content[contenteditable="true"], [data-static-field], select, textarea, button.btn',
+      '.cell-inputs :is(.cm-content[contenteditable="true"], [data-static-field], select, textarea, button.btn)',
     );
     target?.focus();
     onFocused();
@@ -156,7 +157,7 @@ export const CellCard = memo(function CellCard(props: CellCardProps) {
         </header>
 
         <div className={view?.Figure ? 'grid gap-x-5 gap-y-3 @min-[62rem]:grid-cols-[minmax(0,1fr)_minmax(0,26rem)] print:block' : ''}>
-          <div className="@container min-w-0 space-y-1.5">
+          <div className="cell-inputs @container min-w-0 space-y-1.5">
             {view ? (
               <view.Inputs cell={cell} cellName={cellName} result={result} errorField={errorField} errorId={errorId} />
             ) : (

@@ -105,6 +105,8 @@ export function ExpressionEditor(props: ExpressionEditorProps) {
       setBuilt(created);
       if (focus || hadFocus.current) {
         hadFocus.current = false;
+        // The host is still hidden until React re-renders, and a hidden editor cannot take focus.
+        parent.hidden = false;
         created.focus();
         created.dispatch({ selection: { anchor: created.state.doc.length } });
       }
