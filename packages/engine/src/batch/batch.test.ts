@@ -6,6 +6,7 @@ import { checkCriterion } from '../criteria/checkCriterion';
 import { THEORY_IDS } from '../criteria/types';
 import { principalPlaneStresses } from '../stress/principalPlane';
 import { principalStresses } from '../stress/principalStresses';
+import { vonMisesStress } from '../stress/vonMises';
 import { allocatePrincipal, rowCount } from './columns';
 import { criterionFactorBatch, principalAndVonMisesBatch, principalAndVonMisesPlaneBatch, summarizeFactors } from './factorBatch';
 import { principal3DBatch } from './principal3DBatch';
@@ -187,12 +188,23 @@ describe('batch kernels agree with the single-state functions (common practice, 
             const single = checkCriterion(theory, state, strengths[theory]);
             if (!single.ok) throw new Error(single.problem.message);
             const want = single.check.factor;
+            // Rounding in principal stresses is relative to the state's largest component, while
+            // the factors depend on their differences: for a nearly hydrostatic state (600 MPa
+            // mean, a few hundred Pa of deviator) the two solvers may differ by that ratio times
+            // the usual 1e-9.
+            const scale = Math.max(...Object.values(state).map(Math.abs));
+            const deviator = vonMisesStress(state);
+            const conditioning = deviator > 0 ? Math.max(1, scale / deviator) : 1;
             if (!Number.isFinite(want)) expect(factors[i]).toBe(want);
-            else expect(Math.abs(factors[i]! - want)).toBeLessThanOrEqual(1e-9 * Math.max(1, want));
+            else expect(Math.abs(factors[i]! - want)).toBeLessThanOrEqual(1e-9 * Math.max(1, want) * conditioning);
           });
         }
       }),
-      { numRuns: 60 },
+      {
+        numRuns: 60,
+        // A nearly hydrostatic state at 600 MPa that once fell outside a tolerance blind to conditioning.
+        examples: [[[[599999592.5259135, 599999796.408549, 599999999.999997, 0, 0, 0.013663750156867193]], false]],
+      },
     );
   });
 
