@@ -1,4 +1,4 @@
-import { useId } from 'react';
+import { useId, type ReactNode } from 'react';
 
 export interface Choice {
   value: string;
@@ -20,7 +20,7 @@ export function ChoiceField({
   describedBy,
   unknownLabel = (v: string) => `${v} (not available)`,
 }: {
-  label: string;
+  label: ReactNode;
   value: string;
   choices: readonly Choice[];
   onChange: (value: string) => void;

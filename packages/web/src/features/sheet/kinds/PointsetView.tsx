@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import { setPlainField, setTextField } from '../doc/fieldWrites';
 import { ChoiceField } from '../fields/ChoiceField';
+import { FieldSymbol } from '../fields/FieldSymbol';
 import { StrengthFields } from '../fields/StrengthFields';
 import { useSheetEditor } from '../hooks/useSheetEditor';
 import type { KindViewProps } from './kindView';
@@ -8,9 +9,9 @@ import { parseRows, rowsText } from './pointRows';
 
 const UNITS = ['MPa', 'kPa', 'GPa', 'Pa', 'ksi', 'psi'].map((u) => ({ value: u, label: u }));
 const COMPONENTS = [
-  ['sx', 'σx column'],
-  ['sy', 'σy column'],
-  ['txy', 'τxy column'],
+  ['sx', 'σ', 'x'],
+  ['sy', 'σ', 'y'],
+  ['txy', 'τ', 'xy'],
 ] as const;
 
 /**
@@ -75,16 +76,16 @@ export function PointsetInputs({ cell, cellName, errorField, errorId }: KindView
         </p>
       )}
       <div className="grid gap-1 @min-[30rem]:grid-cols-2 @min-[30rem]:gap-x-3">
-        {COMPONENTS.map(([key, label]) => (
+        {COMPONENTS.map(([key, symbol, sub]) => (
           <ChoiceField
             key={key}
-            label={key}
+            label={<FieldSymbol symbol={symbol} sub={sub} />}
             value={String(columns[key] ?? '')}
             choices={columnChoices}
             readOnly={readOnly}
             invalid={errorField === `columns.${key}`}
             describedBy={errorId}
-            unknownLabel={(v) => `${label}: ${v}`}
+            unknownLabel={(v) => `column ${v} (not in the rows)`}
             onChange={(value) => setPlainField(doc, cell.id, 'columns', { ...columns, [key]: Number(value) })}
           />
         ))}
