@@ -41,7 +41,8 @@ export default async function setup(project: TestProject): Promise<() => Promise
   runOrThrow(tsx, ['src/db/migrate.ts'], serverDir, env);
   runOrThrow(tsx, ['src/db/seed.ts'], serverDir, env);
   if (process.env.SHEAF_SKIP_WEB_BUILD !== '1') {
-    runOrThrow(join(root, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], join(root, 'packages', 'web'), env);
+    // The production build that `npm start` serves (NODE_ENV=test would give React's development build).
+    runOrThrow(join(root, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], join(root, 'packages', 'web'), { ...env, NODE_ENV: 'production' });
   }
   server = spawn(tsx, ['src/index.ts'], { cwd: serverDir, env, stdio: ['ignore', 'ignore', 'inherit'] });
   const baseUrl = `http://localhost:${port}`;
