@@ -143,12 +143,14 @@ export {
   MATERIAL_CATEGORIES,
   MATERIAL_PROPERTIES,
   MATERIAL_PROPERTY_KEYS,
+  UNCONFIRMED_SOURCE_WORDS,
   checkMaterialValues,
   materialKeySchema,
   materialRecordSchema,
   materialValueSchema,
   materialsLookupOf,
   toEngineMaterial,
+  unconfirmedKeys,
 } from './library/materialRecord';
 export type { MaterialBasis, MaterialCategory, MaterialProblem, MaterialPropertyKey, MaterialRecord, MaterialValue } from './library/materialRecord';
 export {

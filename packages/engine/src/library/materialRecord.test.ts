@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { findMaterial } from '../kinds/materials';
 import { makeSheet, num, okOf } from '../test/makeSheet';
-import { checkMaterialValues, materialRecordSchema, materialsLookupOf, toEngineMaterial, type MaterialRecord } from './materialRecord';
+import { checkMaterialValues, materialRecordSchema, materialsLookupOf, toEngineMaterial, unconfirmedKeys, type MaterialRecord } from './materialRecord';
 
 const steel: MaterialRecord = {
   id: 'lug-plate-s355',
@@ -89,5 +89,30 @@ describe('library material records', () => {
     );
     // Uniaxial 100 MPa against Sy = 355 MPa: factor 3.55 (common practice, no source).
     expect(num(okOf(ev, 'C'), 'factor')).toBeCloseTo(3.55, 10);
+  });
+
+  it('keeps the mark of a value whose source could not be confirmed, and rejects a mark that is not true or false', () => {
+    const marked: MaterialRecord = {
+      ...steel,
+      properties: { ...steel.properties, E: { ...steel.properties.E!, confirmed: false }, Sy: { ...steel.properties.Sy!, confirmed: true } },
+    };
+    expect(materialRecordSchema.parse(marked).properties.E).toEqual({ value: '210 GPa', basis: 'typical', source: 'Demo handbook, invented', confirmed: false });
+    expect(unconfirmedKeys(marked)).toEqual(['E']);
+    expect(unconfirmedKeys(marked, ['Sy', 'Sut'])).toEqual([]);
+    expect(unconfirmedKeys(steel)).toEqual([]);
+
+    const bad = materialRecordSchema.safeParse({ ...steel, properties: { Sy: { ...steel.properties.Sy, confirmed: 'no' } } });
+    expect(bad.success).toBe(false);
+    expect(bad.error!.issues.map((i) => i.path.join('.'))).toEqual(['properties.Sy.confirmed']);
+  });
+
+  it('says in the evaluator’s source line which values could not be confirmed', () => {
+    const marked: MaterialRecord = {
+      ...steel,
+      properties: { ...steel.properties, nu: { ...steel.properties.nu!, confirmed: false } },
+    };
+    expect(toEngineMaterial(marked).source).toBe(
+      'Sy, Sut (minimum): Demo mill certificate, invented; E (typical): Demo handbook, invented; nu (typical; source not confirmed): Demo handbook, invented',
+    );
   });
 });

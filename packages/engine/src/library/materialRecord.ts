@@ -59,7 +59,15 @@ export const materialKeySchema = z
     error: 'must be 2 to 64 lowercase letters, digits or hyphens, starting and ending with a letter or digit',
   });
 
-/** One property value with its basis and published source. @public */
+/**
+ * One property value with its basis and published source. `confirmed: false` marks a value that
+ * could not be confirmed against the source it names (the table was not reached, or only a
+ * secondary reproduction disagreeing with it was); every surface that shows or uses the value
+ * shows a caution with it, and an issued revision keeps the mark in its frozen copy. `true` says
+ * the value was checked against the named source; absent says nothing either way (an
+ * organization's own values carry their own sources).
+ * @public
+ */
 export const materialValueSchema = z.strictObject({
   value: z.string({ error: 'must be a string' }).trim().min(1, { error: 'must not be empty' }).max(100),
   basis: z.enum(MATERIAL_BASES, { error: `must be one of ${MATERIAL_BASES.join(', ')}` }),
@@ -68,6 +76,7 @@ export const materialValueSchema = z.strictObject({
     .trim()
     .min(3, { error: 'must name the published source (standard or handbook, edition, table), or say "from memory"' })
     .max(500),
+  confirmed: z.boolean({ error: 'must be true or false' }).optional(),
 });
 /** @public */
 export type MaterialValue = z.infer<typeof materialValueSchema>;
@@ -140,27 +149,45 @@ export function checkMaterialValues(record: Pick<MaterialRecord, 'properties'>):
   return problems;
 }
 
+/** The words that mark a value whose source could not be confirmed, wherever it is written out. @public */
+export const UNCONFIRMED_SOURCE_WORDS = 'source not confirmed';
+
+/**
+ * The properties of a material whose values are marked `confirmed: false`, in the library's
+ * property order (Sy, Sut, Suc, c, phi, E, nu), limited to `keys` when given (the strengths a
+ * check uses).
+ * @example unconfirmedKeys(ss17_4ph, ['Sy']) // ['Sy']
+ * @public
+ */
+export function unconfirmedKeys(
+  record: Pick<MaterialRecord, 'properties'>,
+  keys: readonly MaterialPropertyKey[] = MATERIAL_PROPERTY_KEYS,
+): MaterialPropertyKey[] {
+  return MATERIAL_PROPERTY_KEYS.filter((key) => keys.includes(key) && record.properties[key]?.confirmed === false);
+}
+
 /**
  * The material as the evaluator takes it: the values as expressions with units, and one
  * `source` line that names the source of each value (values sharing a source are listed together,
  * each with its basis), e.g. `Sy, Sut (minimum): ASTM A36/A36M-19, Table 3; E, nu (typical): ...`.
+ * Values marked `confirmed: false` say so in their group: `E, nu (typical; source not confirmed): ...`.
  * @public
  */
 export function toEngineMaterial(record: Pick<MaterialRecord, 'name' | 'properties'>): Material {
   const values: Partial<Record<MaterialPropertyKey, string>> = {};
-  const bySource = new Map<string, MaterialPropertyKey[]>();
+  const groups = new Map<string, { keys: MaterialPropertyKey[]; basis: string; source: string; unconfirmed: boolean }>();
   for (const key of MATERIAL_PROPERTY_KEYS) {
     const entry = record.properties[key];
     if (!entry) continue;
     values[key] = entry.value;
-    const label = `${entry.basis}|${entry.source}`;
-    bySource.set(label, [...(bySource.get(label) ?? []), key]);
+    const unconfirmed = entry.confirmed === false;
+    const label = JSON.stringify([entry.basis, entry.source, unconfirmed]);
+    const group = groups.get(label);
+    if (group) group.keys.push(key);
+    else groups.set(label, { keys: [key], basis: entry.basis, source: entry.source, unconfirmed });
   }
-  const source = [...bySource.entries()]
-    .map(([label, keys]) => {
-      const [basis, text] = [label.slice(0, label.indexOf('|')), label.slice(label.indexOf('|') + 1)];
-      return `${keys.join(', ')} (${basis}): ${text}`;
-    })
+  const source = [...groups.values()]
+    .map((g) => `${g.keys.join(', ')} (${g.basis}${g.unconfirmed ? `; ${UNCONFIRMED_SOURCE_WORDS}` : ''}): ${g.source}`)
     .join('; ');
   return { name: record.name, ...values, source };
 }
