@@ -33,6 +33,20 @@ const hubIron: LibraryMaterial = {
   },
 };
 
+const ph17: LibraryMaterial = {
+  id: 'ss-17-4ph-h1025',
+  name: 'Stainless steel 17-4 PH, condition H1025',
+  category: 'stainless-steel',
+  notes: '',
+  builtin: true,
+  updatedAt: null,
+  properties: {
+    Sy: { value: '1000 MPa', basis: 'minimum', source: 'ASTM A564/A564M, H1025 (from memory). Not confirmed', confirmed: false },
+    Sut: { value: '1070 MPa', basis: 'minimum', source: 'ASTM A564/A564M, H1025 (from memory). Not confirmed', confirmed: false },
+    E: { value: '197 GPa', basis: 'typical', source: 'Producer data, checked', confirmed: true },
+  },
+};
+
 function Harness({ initial, theory }: { initial?: string; theory: 'von-mises' | 'coulomb-mohr' }) {
   const [value, setValue] = useState<string | undefined>(initial);
   return (
@@ -44,7 +58,7 @@ function Harness({ initial, theory }: { initial?: string; theory: 'von-mises' | 
 }
 
 function renderPicker(initial: string | undefined, theory: 'von-mises' | 'coulomb-mohr') {
-  mockFetch({ [`GET /api/orgs/${ORG}/materials`]: { body: { materials: [a36, hubIron] } } });
+  mockFetch({ [`GET /api/orgs/${ORG}/materials`]: { body: { materials: [a36, hubIron, ph17] } } });
   return render(
     <QueryClientProvider client={createAppQueryClient()}>
       <Harness initial={initial} theory={theory} />
@@ -75,5 +89,27 @@ describe('MaterialPicker', () => {
   it('says so when the cell names a material the library does not hold', async () => {
     renderPicker('gone-steel', 'von-mises');
     expect(await screen.findByText(/“gone-steel” is not in this organization’s materials library/)).toBeTruthy();
+  });
+
+  it('marks a material whose values for the check are not confirmed, and cautions under the values the check uses', async () => {
+    renderPicker(undefined, 'von-mises');
+    const select = (await screen.findByLabelText('Material')) as HTMLSelectElement;
+    // von Mises takes Sy only: the option names Sy, not the other unconfirmed value Sut.
+    expect(await screen.findByRole('option', { name: 'Stainless steel 17-4 PH, condition H1025 — Sy source not confirmed' })).toBeTruthy();
+    expect(screen.getByRole('option', { name: 'ASTM A36 structural steel' })).toBeTruthy();
+    expect(screen.queryByRole('note')).toBeNull();
+
+    fireEvent.change(select, { target: { value: 'ss-17-4ph-h1025' } });
+    const caution = await screen.findByRole('note');
+    expect(caution.textContent).toMatch(/^Caution, source not confirmed: Yield strength Sy was not confirmed against the published source named beside it\. Verify it against the specification or the material certificate before relying on this check\.$/);
+    expect(screen.getByText('source not confirmed')).toBeTruthy();
+    expect(screen.getByText('unconfirmed')).toBeTruthy();
+  });
+
+  it('shows no caution for a material whose values are confirmed', async () => {
+    renderPicker('astm-a36', 'von-mises');
+    expect(await screen.findByText('ASTM A36/A36M-19, Table 3')).toBeTruthy();
+    expect(screen.queryByRole('note')).toBeNull();
+    expect(screen.queryByText('unconfirmed')).toBeNull();
   });
 });

@@ -1,9 +1,10 @@
 import { useId } from 'react';
-import { MATERIAL_CATEGORIES, THEORIES, type MaterialCategory, type TheoryId } from '@sheaf/engine';
+import { MATERIAL_CATEGORIES, THEORIES, unconfirmedKeys, type MaterialCategory, type MaterialPropertyKey, type TheoryId } from '@sheaf/engine';
 import type { LibraryMaterial } from '@sheaf/engine/api';
 import { describeError } from '../../api/ApiError';
 import { CATEGORY_LABEL } from './categoryLabels';
 import { MaterialValues } from './MaterialValues';
+import { SourceCaution } from './SourceCaution';
 import { useMaterials } from './useMaterials';
 
 export interface MaterialPickerProps {
@@ -15,7 +16,7 @@ export interface MaterialPickerProps {
   theory?: TheoryId;
   label?: string;
   disabled?: boolean;
-  /** Hide the values-and-sources list under the choice. */
+  /** Hide the values-and-sources list under the choice (the caution on unconfirmed values stays). */
   compact?: boolean;
   /** Keep the label for assistive technology only (a row label sits beside the picker). */
   visuallyHiddenLabel?: boolean;
@@ -26,9 +27,16 @@ function lacks(material: LibraryMaterial, theory: TheoryId | undefined): string[
   return THEORIES[theory].needs.filter((key) => !material.properties[key]);
 }
 
+/** The values the cell's check would take from the material that are not confirmed against their source. */
+function unconfirmedFor(material: LibraryMaterial, theory: TheoryId | undefined): MaterialPropertyKey[] {
+  return theory ? unconfirmedKeys(material, THEORIES[theory].needs) : unconfirmedKeys(material);
+}
+
 /**
  * The material choice of a criterion or point-set cell: the organization's library grouped by
- * category, and under it the values the check uses with their basis and published source.
+ * category, and under it the values the check uses with their basis and published source. A
+ * material whose values for the check are not confirmed against their source says so in its
+ * option, and the values under the choice carry the caution.
  * Self-contained: it loads the library itself (one shared request).
  * @example <MaterialPicker organizationId={orgId} value={cell.material} theory={cell.theory} onChange={setMaterial} />
  */
@@ -62,11 +70,13 @@ export function MaterialPicker({ organizationId, value, onChange, theory, label 
             <optgroup key={category} label={CATEGORY_LABEL[category as MaterialCategory]}>
               {items.map((m) => {
                 const missing = lacks(m, theory);
+                const unconfirmed = unconfirmedFor(m, theory);
                 return (
                   <option key={m.id} value={m.id}>
                     {m.name}
                     {m.builtin ? '' : ' (ours)'}
                     {missing.length > 0 ? ` — no ${missing.join(', ')}` : ''}
+                    {unconfirmed.length > 0 ? ` — ${unconfirmed.join(', ')} source not confirmed` : ''}
                   </option>
                 );
               })}
@@ -81,7 +91,9 @@ export function MaterialPicker({ organizationId, value, onChange, theory, label 
           </p>
         ) : value !== undefined && !selected && !materials.isPending ? (
           <p className="text-[0.8125rem] text-fail">“{value}” is not in this organization’s materials library.</p>
-        ) : selected && !compact ? (
+        ) : selected && compact ? (
+          <SourceCaution keys={unconfirmedFor(selected, theory)} use="this check" />
+        ) : selected ? (
           <MaterialValues material={selected} keys={needs} />
         ) : null}
       </div>

@@ -1,12 +1,15 @@
-import { MATERIAL_PROPERTIES, MATERIAL_PROPERTY_KEYS, type MaterialPropertyKey } from '@sheaf/engine';
+import { MATERIAL_PROPERTIES, MATERIAL_PROPERTY_KEYS, unconfirmedKeys, type MaterialPropertyKey } from '@sheaf/engine';
 import type { LibraryMaterial } from '@sheaf/engine/api';
 import { BasisTag } from './BasisTag';
 import { PropertySymbol } from './PropertySymbol';
+import { SourceCaution } from './SourceCaution';
+import { UnconfirmedTag } from './UnconfirmedTag';
 
 /**
  * The values of a material that a check uses, each with its basis and its published source, as
  * a sheet shows them under a criterion or point-set cell. `keys` limits the list (the strengths a
- * theory needs); all values are listed otherwise.
+ * theory needs); all values are listed otherwise. A value whose source could not be confirmed is
+ * marked beside its basis, and a caution under the list names it.
  */
 export function MaterialValues({
   material,
@@ -19,6 +22,7 @@ export function MaterialValues({
 }) {
   const shown = MATERIAL_PROPERTY_KEYS.filter((k) => (keys ? keys.includes(k) : true) && material.properties[k]);
   const missing = (keys ?? []).filter((k) => !material.properties[k]);
+  const unconfirmed = unconfirmedKeys(material, shown);
   return (
     <figure className="text-[0.8125rem]">
       <figcaption className="mb-1 text-ink-muted">
@@ -37,12 +41,14 @@ export function MaterialValues({
               <dd className="font-mono whitespace-nowrap">
                 {entry.value}
                 <BasisTag basis={entry.basis} />
+                {entry.confirmed === false ? <UnconfirmedTag /> : null}
               </dd>
               <dd className="text-ink-muted">{entry.source}</dd>
             </div>
           );
         })}
       </dl>
+      <SourceCaution keys={unconfirmed} use={keys ? 'this check' : undefined} />
       {missing.length > 0 ? (
         <p className="mt-1 text-fail">
           This material has no {missing.join(', ')}, which the check needs.

@@ -5,16 +5,18 @@ import { BasisTag } from './BasisTag';
 import { CATEGORY_LABEL } from './categoryLabels';
 import { filterAndSortMaterials, materialRows, type MaterialFilter, type MaterialSort, type MaterialSortKey } from './materialRows';
 import { PropertySymbol } from './PropertySymbol';
+import { UnconfirmedTag } from './UnconfirmedTag';
 
-/** Group a material's values by their source, as "Sy, Sut: source" lines. */
-function sourceLines(m: LibraryMaterial): { keys: MaterialPropertyKey[]; source: string }[] {
-  const lines: { keys: MaterialPropertyKey[]; source: string }[] = [];
+/** Group a material's values by their source, as "Sy, Sut: source" lines; an unconfirmed value never shares a line with a confirmed one. */
+function sourceLines(m: LibraryMaterial): { keys: MaterialPropertyKey[]; source: string; unconfirmed: boolean }[] {
+  const lines: { keys: MaterialPropertyKey[]; source: string; unconfirmed: boolean }[] = [];
   for (const key of MATERIAL_PROPERTY_KEYS) {
     const entry = m.properties[key];
     if (!entry) continue;
-    const line = lines.find((l) => l.source === entry.source);
+    const unconfirmed = entry.confirmed === false;
+    const line = lines.find((l) => l.source === entry.source && l.unconfirmed === unconfirmed);
     if (line) line.keys.push(key);
-    else lines.push({ keys: [key], source: entry.source });
+    else lines.push({ keys: [key], source: entry.source, unconfirmed });
   }
   return lines;
 }
@@ -124,7 +126,8 @@ export function MaterialsTable({
       </div>
       <p className="mb-2 text-[0.8125rem] text-ink-muted" aria-live="polite">
         {shown.length} of {rows.length} materials. Values as published, with their basis: <BasisTag basis="minimum" /> specification
-        minimum, <BasisTag basis="typical" /> typical, <BasisTag basis="design" /> design value.
+        minimum, <BasisTag basis="typical" /> typical, <BasisTag basis="design" /> design value. <UnconfirmedTag /> marks a value
+        whose source could not be confirmed: verify it against the specification or the material certificate before relying on it.
       </p>
       <div className="overflow-x-auto">
         <table className="ruled text-[0.8125rem] [&_tbody_td]:border-b-0">
@@ -162,6 +165,7 @@ export function MaterialsTable({
                         <>
                           {entry.value}
                           <BasisTag basis={entry.basis} />
+                          {entry.confirmed === false ? <UnconfirmedTag /> : null}
                         </>
                       ) : (
                         <span className="text-ink-faint" aria-label="none">
@@ -178,8 +182,9 @@ export function MaterialsTable({
                   <span className="sr-only">Sources of {m.name}: </span>
                   <ul className="space-y-0.5 pl-3">
                     {sourceLines(m).map((line) => (
-                      <li key={line.source}>
-                        <span className="font-mono text-ink">{line.keys.join(', ')}</span>: {line.source}
+                      <li key={`${line.unconfirmed}|${line.source}`}>
+                        <span className="font-mono text-ink">{line.keys.join(', ')}</span>
+                        {line.unconfirmed ? <UnconfirmedTag /> : null}: {line.source}
                       </li>
                     ))}
                   </ul>
