@@ -92,7 +92,11 @@ describe('frozen material values of a revision', () => {
     expect(made.status).toBe(201);
     const revisionContent = {
       ...content,
-      cells: content.cells.filter((c) => c.id !== 'c4').map((c) => (c.material === 'hub-iron-demo' ? { ...c, material: 'hub-iron-rev' } : c)),
+      cells: [
+        ...content.cells.filter((c) => c.id !== 'c4').map((c) => (c.material === 'hub-iron-demo' ? { ...c, material: 'hub-iron-rev' } : c)),
+        // A built-in material whose values are marked as not confirmed against their source.
+        { id: 'c5', kind: 'criterion', name: 'pinYield', of: 'S', theory: 'von-mises', material: 'ss-17-4ph-h1025' },
+      ],
     };
     const sheet = await createSheet(server.deps.dataSource, team.project, { title: 'Pulley hub, issued', content: revisionContent, createdByUserId: team.users.engineer.id });
     await submitForCheck(server.deps.dataSource, undefined, sheet.id, { userId: team.users.engineer.id }, { checkerUserId: team.users.checker.id });
@@ -102,7 +106,10 @@ describe('frozen material values of a revision', () => {
     const issued: RevisionDetail = (await viewer.get(`/api/sheets/${sheet.id}/revisions/1`)).body.revision;
     expect(issued.materials?.['hub-iron-rev']?.properties.Sut?.value).toBe('220 MPa');
     expect(issued.materials?.['hub-iron-rev']?.properties.Sut?.source).toBe('Demo foundry test bars, invented');
-    expect(Object.keys(issued.materials ?? {}).sort()).toEqual(['astm-a36', 'hub-iron-rev']);
+    expect(Object.keys(issued.materials ?? {}).sort()).toEqual(['astm-a36', 'hub-iron-rev', 'ss-17-4ph-h1025']);
+    // The frozen copy keeps the mark of values that could not be confirmed, for the revision's report.
+    expect(issued.materials?.['ss-17-4ph-h1025']?.properties.Sy).toMatchObject({ value: '1000 MPa', basis: 'minimum', confirmed: false });
+    expect(issued.materials?.['astm-a36']?.properties.Sy?.confirmed).toBe(true);
     const factorAtIssue = issued.results.cells.BCM?.values?.factor as number;
     // Brittle Coulomb-Mohr with Sut = 220 MPa, Suc = 760 MPa (Shigley 9th ed., eq. 5-31, from memory).
     const centre = (-30 + 55) / 2;
