@@ -47,7 +47,7 @@ describe('templates and materials', () => {
     // Hoop stress pr/t = 18 MPa * 60 / 5 = 216 MPa (common practice, no source).
     const preview = page.getByRole('table', { name: 'Results with these values' });
     await expect.poll(() => preview.getByRole('row').filter({ hasText: 's_hoop' }).innerText(), { timeout: 15_000 }).toMatch(/216 MPa/);
-    await expect.poll(() => preview.getByRole('row').filter({ hasText: /^DE/ }).innerText()).toMatch(/n = .*Pass/s);
+    await expect.poll(() => preview.getByRole('row').filter({ hasText: /^vonMises/ }).innerText()).toMatch(/n = .*Pass/s);
     await screenshot(page, 'templates-parameter-form');
 
     await page.getByRole('button', { name: /create the sheet/i }).click();
@@ -65,7 +65,7 @@ describe('templates and materials', () => {
 
     const sheetId = page.url().split('/').pop() as string;
     const api = await page.evaluate(async (id) => (await fetch(`/api/sheets/${id}`)).json(), sheetId);
-    expect(api.sheet.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 1 });
+    expect(api.sheet.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 2 });
     await screenshot(page, 'templates-sheet-from-template');
     await context.close();
   });
@@ -88,6 +88,13 @@ describe('templates and materials', () => {
     await expect.poll(() => page.getByRole('rowgroup').filter({ hasText: 'Dense sand' }).count()).toBe(1);
     expect(await page.getByRole('rowgroup').filter({ hasText: 'ASTM A36' }).count()).toBe(0);
     await screenshot(page, 'materials-library');
+
+    // A value whose source could not be confirmed carries the mark beside its basis and its source line.
+    await page.getByLabel('Category').selectOption('rock');
+    const rock = page.getByRole('rowgroup').filter({ hasText: 'Weathered sandstone' });
+    await expect.poll(() => rock.count()).toBe(1);
+    expect(await rock.innerText()).toMatch(/100 kPa[\s\S]*unconfirmed[\s\S]*Not confirmed/);
+    await screenshot(page, 'materials-library-unconfirmed');
     await context.close();
   });
 });

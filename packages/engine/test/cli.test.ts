@@ -30,7 +30,7 @@ describe('sheaf eval', () => {
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/^Gantry beam lifting lug, weld toe at section A-A {2}\(US units\)/);
     expect(r.stdout).toMatch(/\nS +stress +sx = 18\.987 ksi/);
-    expect(r.stdout).toMatch(/\nDE +criterion +equivalent = .* pass = pass/);
+    expect(r.stdout).toMatch(/\nvonMises +criterion +equivalent = .* pass = pass/);
     expect(r.stdout).toContain('15 named cells, 0 with errors');
   }, 180_000);
 
@@ -52,9 +52,9 @@ describe('sheaf eval', () => {
   it('materials come from --materials', () => {
     const file = join(examples, 'hoist-drive-shaft.sheaf.json');
     const without = sheaf('eval', file, '--json');
-    expect(JSON.parse(without.stdout).cells.DE.error.code).toBe('unknown-material');
+    expect(JSON.parse(without.stdout).cells.vonMises.error.code).toBe('unknown-material');
     const withList = sheaf('eval', file, '--json', '--materials', join(examples, 'materials.json'));
-    expect(JSON.parse(withList.stdout).cells.DE.values.pass).toBe(true);
+    expect(JSON.parse(withList.stdout).cells.vonMises.values.pass).toBe(true);
   }, 180_000);
 
   it('an invalid file exits 1 with a message naming the field', () => {

@@ -71,8 +71,8 @@ describe('templates', () => {
     });
     expect(res.status).toBe(201);
     const sheet: SheetDetail = res.body.sheet;
-    expect(sheet.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 1 });
-    expect(res.body.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 1 });
+    expect(sheet.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 2 });
+    expect(res.body.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 2 });
     const exprs = Object.fromEntries(sheet.content.cells.filter((c) => c.kind === 'quantity').map((c) => [c.name, c.expr]));
     expect(exprs).toMatchObject({ p: '25 MPa', r: '80 mm', t: '8 mm' });
     const ev = createEvaluator(sheet.content as never, { materials: await materialsLookupFor(server.deps.dataSource, team.organizationId) });
@@ -82,7 +82,7 @@ describe('templates', () => {
     expect(hoop?.ok && (hoop.values.value as number) / 1e6).toBeCloseTo(250, 9);
 
     const fetched = await viewer.get(`/api/sheets/${sheet.id}`);
-    expect(fetched.body.sheet.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 1 });
+    expect(fetched.body.sheet.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 2 });
   });
 
   it('refuses parameter values out of range, of the wrong dimension or unknown, naming each field, and creates nothing', async () => {

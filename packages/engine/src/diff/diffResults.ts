@@ -32,7 +32,7 @@ const SKIPPED_KEYS = new Set(['unbounded']);
  * check cells whose verdict (`pass`) flipped. Values come from the stored results (the engine's
  * machine output, SI base units); the contents are evaluated only to learn what each value
  * measures, so a stress reads `130.91 MPa` and a factor of safety `1.8535`.
- * @example diffResults(rev1, rev2).crossings // [{ cellName: 'DE', from: 'pass', to: 'fail', ... }]
+ * @example diffResults(rev1, rev2).crossings // [{ cellName: 'vonMises', from: 'pass', to: 'fail', ... }]
  * @public
  */
 export function diffResults(

@@ -49,7 +49,7 @@ describe('diffRevisions on the lifting lug example', () => {
   it('lists the results that moved: only the cells downstream of the lever arm', () => {
     const moved = [...new Set(diff.results.map((change) => change.cellName))];
     // M = Fsh e; S takes M; principal and both criteria take S. A, Z, Fax, Fsh do not depend on e.
-    expect(moved).toEqual(['e', 'M', 'S', 'Pr', 'DE', 'MSS']);
+    expect(moved).toEqual(['e', 'M', 'S', 'Pr', 'vonMises', 'tresca']);
     expect(diff.results.filter((c) => c.cellName === 'S').map((c) => c.key)).toEqual(['sx']);
     expect(diff.results.find((c) => c.cellName === 'e')).toMatchObject({
       key: 'value',
@@ -71,26 +71,26 @@ describe('diffRevisions on the lifting lug example', () => {
     expect(sx?.new?.text).toBe('173.1 MPa');
     // von Mises in plane stress, sqrt(sx² + 3 txy²) (distortion energy, from memory):
     // 134.88 MPa and 176.12 MPa; factor Sy / sigma' with Sy = 250 MPa: 1.8535 and 1.4195.
-    const factor = diff.results.find((c) => c.cellName === 'DE' && c.key === 'factor');
+    const factor = diff.results.find((c) => c.cellName === 'vonMises' && c.key === 'factor');
     expect(factor?.old?.si).toBeCloseTo(1.8535, 3);
     expect(factor?.new?.si).toBeCloseTo(1.4195, 3);
     expect([factor?.old?.text, factor?.new?.text]).toEqual(['1.8535', '1.4195']);
-    const equivalent = diff.results.find((c) => c.cellName === 'DE' && c.key === 'equivalent');
+    const equivalent = diff.results.find((c) => c.cellName === 'vonMises' && c.key === 'equivalent');
     expect(equivalent?.new?.text).toBe('176.12 MPa');
   });
 
   it('highlights the verdicts that crossed from pass to fail against the required 1.5', () => {
     // Tresca by hand: tau_max = sqrt((sx/2)² + txy²); factor Sy / (2 tau_max) = 1.8358 -> 1.4115.
     expect(diff.crossings).toEqual([
-      { cellId: 'c1', cellName: 'DE', kind: 'criterion', from: 'pass', to: 'fail', direction: 'pass-to-fail' },
-      { cellId: 'c2', cellName: 'MSS', kind: 'criterion', from: 'pass', to: 'fail', direction: 'pass-to-fail' },
+      { cellId: 'c1', cellName: 'vonMises', kind: 'criterion', from: 'pass', to: 'fail', direction: 'pass-to-fail' },
+      { cellId: 'c2', cellName: 'tresca', kind: 'criterion', from: 'pass', to: 'fail', direction: 'pass-to-fail' },
     ]);
     const passRows = diff.results.filter((c) => c.key === 'pass');
     expect(passRows.map((c) => [c.cellName, c.old?.text, c.new?.text, c.crossing])).toEqual([
-      ['DE', 'pass', 'fail', 'pass-to-fail'],
-      ['MSS', 'pass', 'fail', 'pass-to-fail'],
+      ['vonMises', 'pass', 'fail', 'pass-to-fail'],
+      ['tresca', 'pass', 'fail', 'pass-to-fail'],
     ]);
-    const tresca = diff.results.find((c) => c.cellName === 'MSS' && c.key === 'factor');
+    const tresca = diff.results.find((c) => c.cellName === 'tresca' && c.key === 'factor');
     expect(tresca?.old?.si).toBeCloseTo(1.8358, 3);
     expect(tresca?.new?.si).toBeCloseTo(1.4115, 3);
   });

@@ -14,7 +14,7 @@ import type { InputChange, RevisionDiff, RevisionSnapshot } from './types';
  * @example
  *   const diff = diffRevisions(rev1, rev2);
  *   diff.changed   // [{ id: 'q5', inputs: [{ field: 'expr', old: '35 mm', new: '50 mm' }], ... }]
- *   diff.crossings // [{ cellName: 'DE', from: 'pass', to: 'fail', direction: 'pass-to-fail', ... }]
+ *   diff.crossings // [{ cellName: 'vonMises', from: 'pass', to: 'fail', direction: 'pass-to-fail', ... }]
  * @public
  */
 export function diffRevisions(older: RevisionSnapshot, newer: RevisionSnapshot, options: DiffResultsOptions = {}): RevisionDiff {

@@ -203,8 +203,8 @@ describe('built-in templates against independent checks', () => {
     const ev = evaluate('thin-walled-cylinder');
     const hoop = (20 * MPA * 60) / 6;
     const sy = strength('aisi-4140-qt650', 'Sy');
-    expect(n(ev, 'DE', 'factor')).toBeCloseTo(sy / ((hoop * Math.sqrt(3)) / 2), 9);
-    expect(n(ev, 'MSS', 'factor')).toBeCloseTo(sy / hoop, 9);
+    expect(n(ev, 'vonMises', 'factor')).toBeCloseTo(sy / ((hoop * Math.sqrt(3)) / 2), 9);
+    expect(n(ev, 'tresca', 'factor')).toBeCloseTo(sy / hoop, 9);
   });
 
   it('thin-walled sphere: Hibbeler, Mechanics of Materials, 8th ed., Example 8.1 (from memory): the same sphere carries 833 psi at 20 ksi', () => {
@@ -213,8 +213,8 @@ describe('built-in templates against independent checks', () => {
     // Equal biaxial membrane state with the radial 0: von Mises and Tresca both equal sigma.
     const s = n(ev, 's_membrane');
     const sy = strength('astm-a36', 'Sy');
-    expect(n(ev, 'DE', 'factor')).toBeCloseTo(sy / s, 9);
-    expect(n(ev, 'MSS', 'factor')).toBeCloseTo(sy / s, 9);
+    expect(n(ev, 'vonMises', 'factor')).toBeCloseTo(sy / s, 9);
+    expect(n(ev, 'tresca', 'factor')).toBeCloseTo(sy / s, 9);
   });
 
   it('solid round shaft: hand formula (common practice, no source): sigma = Kt(32M/(pi d^3) + 4P/(pi d^2)), tau = Kts 16T/(pi d^3), von Mises sqrt(sigma^2 + 3 tau^2), Tresca 2 sqrt((sigma/2)^2 + tau^2)', () => {
@@ -226,8 +226,8 @@ describe('built-in templates against independent checks', () => {
     expect(s('sx') / MPA).toBeCloseTo(sigma / MPA, 9);
     expect(s('txy') / MPA).toBeCloseTo(tau / MPA, 9);
     const sy = strength('aisi-1045-cd', 'Sy');
-    expect(n(ev, 'DE', 'factor')).toBeCloseTo(sy / Math.sqrt(sigma ** 2 + 3 * tau ** 2), 9);
-    expect(n(ev, 'MSS', 'factor')).toBeCloseTo(sy / (2 * Math.sqrt((sigma / 2) ** 2 + tau ** 2)), 9);
+    expect(n(ev, 'vonMises', 'factor')).toBeCloseTo(sy / Math.sqrt(sigma ** 2 + 3 * tau ** 2), 9);
+    expect(n(ev, 'tresca', 'factor')).toBeCloseTo(sy / (2 * Math.sqrt((sigma / 2) ** 2 + tau ** 2)), 9);
   });
 
   it('hollow round shaft: hand formula with (D^4 - d^4) (common practice, no source), and with no bore it equals the solid shaft', () => {
@@ -238,7 +238,7 @@ describe('built-in templates against independent checks', () => {
     expect(si(ev, 'S')('sx') / MPA).toBeCloseTo(sigma / MPA, 9);
     expect(si(ev, 'S')('txy') / MPA).toBeCloseTo(tau / MPA, 9);
     const sy = strength('aisi-4140-qt650', 'Sy');
-    expect(n(ev, 'DE', 'factor')).toBeCloseTo(sy / Math.sqrt(sigma ** 2 + 3 * tau ** 2), 9);
+    expect(n(ev, 'vonMises', 'factor')).toBeCloseTo(sy / Math.sqrt(sigma ** 2 + 3 * tau ** 2), 9);
 
     const hollowAsSolid = evaluate('hollow-round-shaft', { D: '35 mm', di: '0 mm', M: '0.38 kN m', T: '0.45 kN m', Pax: '6 kN', Kt: '1.7', Kts: '1.5' });
     const solid = evaluate('solid-round-shaft');
@@ -283,9 +283,9 @@ describe('built-in templates against independent checks', () => {
     const [sA, sB] = [(centre + radius) * MPA, (centre - radius) * MPA];
     const sut = strength('gray-iron-astm30', 'Sut');
     const suc = strength('gray-iron-astm30', 'Suc');
-    expect(n(ev, 'BCM', 'factor')).toBeCloseTo(1 / (sA / sut - sB / suc), 9);
+    expect(n(ev, 'coulombMohr', 'factor')).toBeCloseTo(1 / (sA / sut - sB / suc), 9);
     expect(Math.abs(sB / sA)).toBeGreaterThan(1);
-    expect(n(ev, 'MM', 'factor')).toBeCloseTo(1 / (((suc - sut) * sA) / (suc * sut) - sB / suc), 9);
+    expect(n(ev, 'modifiedMohr', 'factor')).toBeCloseTo(1 / (((suc - sut) * sA) / (suc * sut) - sB / suc), 9);
   });
 
   it('brittle cast part, pure torsion: Shigley 9th ed., Example 5-5 (example number and figures from memory): tau = 14.06 ksi with St = 24 ksi, Sc = 35 ksi gives n = 1.01', () => {
@@ -295,7 +295,7 @@ describe('built-in templates against independent checks', () => {
     // 1 in shaft, 230 lbf ft: tau = 16 T / (pi d^3) = 14.06 ksi.
     const ev = evaluate('brittle-cast-part', { sx: '0 ksi', sy: '0 ksi', txy: '16 * 230 lbf ft / (pi * (1 in)^3)' }, shigley);
     expect(si(ev, 'S')('txy') / KSI).toBeCloseTo(14.06, 2);
-    expect(n(ev, 'BCM', 'factor')).toBeCloseTo(1.01, 2);
+    expect(n(ev, 'coulombMohr', 'factor')).toBeCloseTo(1.01, 2);
   });
 
   it('soil element, dense sand (c = 0): F = tan(phi) / tan(asin(R/s)) for the circle of sigma_v and K0 sigma_v (common practice, no source)', () => {
@@ -303,7 +303,7 @@ describe('built-in templates against independent checks', () => {
     const sv = 19e3 * 3 + (150e3 * 2.5 ** 2) / (2.5 + 3) ** 2;
     const [s, R] = [((1 + 0.45) * sv) / 2, ((1 - 0.45) * sv) / 2];
     const phi = strength('dense-sand', 'phi');
-    expect(n(ev, 'MC', 'factor')).toBeCloseTo(Math.tan(phi) / Math.tan(Math.asin(R / s)), 9);
+    expect(n(ev, 'mohrCoulomb', 'factor')).toBeCloseTo(Math.tan(phi) / Math.tan(Math.asin(R / s)), 9);
   });
 
   it('soil element, stiff clay (c > 0): the strength-reduction factor found by bisection on the tangency of the reduced envelope (common practice, no source)', () => {
@@ -325,7 +325,7 @@ describe('built-in templates against independent checks', () => {
       if (gap(mid) > 0) lo = mid;
       else hi = mid;
     }
-    expect(n(ev, 'MC', 'factor')).toBeCloseTo((lo + hi) / 2, 9);
+    expect(n(ev, 'mohrCoulomb', 'factor')).toBeCloseTo((lo + hi) / 2, 9);
   });
 
   it('3D stress at a point: principal stresses by Jacobi rotations, von Mises from the components, Tresca from s1 - s3 (common practice, no source)', () => {
@@ -341,8 +341,8 @@ describe('built-in templates against independent checks', () => {
     expect([pr('s1'), pr('s2'), pr('s3')].map((v) => v / MPA)).toEqual(eig.map((v) => expect.closeTo(v, 8)));
     const vm = Math.sqrt(0.5 * ((sx - sy) ** 2 + (sy - sz) ** 2 + (sz - sx) ** 2) + 3 * (txy ** 2 + tyz ** 2 + tzx ** 2));
     const sy250 = strength('astm-a36', 'Sy') / MPA;
-    expect(n(ev, 'DE', 'factor')).toBeCloseTo(sy250 / vm, 9);
-    expect(n(ev, 'MSS', 'factor')).toBeCloseTo(sy250 / ((eig[0] as number) - (eig[2] as number)), 9);
+    expect(n(ev, 'vonMises', 'factor')).toBeCloseTo(sy250 / vm, 9);
+    expect(n(ev, 'tresca', 'factor')).toBeCloseTo(sy250 / ((eig[0] as number) - (eig[2] as number)), 9);
   });
 });
 

@@ -43,7 +43,7 @@ export const BUILT_IN_DEMO_SHEETS: readonly DemoSheet[] = [
       { id: 'c3', kind: 'quantity', name: 'A', expr: '40 mm * 12 mm' },
       { id: 'c4', kind: 'stress', name: 'S', sx: 'F / A', sy: '0 MPa', txy: '22 MPa' },
       { id: 'c5', kind: 'principal', name: 'P', of: 'S' },
-      { id: 'c6', kind: 'criterion', name: 'C', of: 'S', theory: 'von-mises', strength: { Sy: '250 MPa' }, required: '1.5' },
+      { id: 'c6', kind: 'criterion', name: 'vonMises', of: 'S', theory: 'von-mises', strength: { Sy: '250 MPa' }, required: '1.5' },
     ]),
   },
   {
@@ -55,7 +55,7 @@ export const BUILT_IN_DEMO_SHEETS: readonly DemoSheet[] = [
       { id: 'c3', kind: 'quantity', name: 'd', expr: '40 mm' },
       { id: 'c4', kind: 'stress', name: 'S', sx: '32 * M / (pi * d^3)', sy: '0 MPa', txy: '16 * T / (pi * d^3)' },
       { id: 'c5', kind: 'principal', name: 'P', of: 'S' },
-      { id: 'c6', kind: 'criterion', name: 'C', of: 'S', theory: 'tresca', strength: { Sy: '350 MPa' }, required: '2' },
+      { id: 'c6', kind: 'criterion', name: 'tresca', of: 'S', theory: 'tresca', strength: { Sy: '350 MPa' }, required: '2' },
     ]),
   },
   {
@@ -67,7 +67,7 @@ export const BUILT_IN_DEMO_SHEETS: readonly DemoSheet[] = [
       { id: 'c3', kind: 'quantity', name: 't', expr: '8 mm' },
       { id: 'c4', kind: 'stress', name: 'S', sx: 'p * r / (2 * t)', sy: 'p * r / t', txy: '0 MPa' },
       { id: 'c5', kind: 'principal', name: 'P', of: 'S' },
-      { id: 'c6', kind: 'criterion', name: 'C', of: 'S', theory: 'von-mises', strength: { Sy: '355 MPa' }, required: '1.5' },
+      { id: 'c6', kind: 'criterion', name: 'vonMises', of: 'S', theory: 'von-mises', strength: { Sy: '355 MPa' }, required: '1.5' },
     ]),
   },
   {
@@ -86,7 +86,7 @@ export const BUILT_IN_DEMO_SHEETS: readonly DemoSheet[] = [
         nu: '0.29',
       },
       { id: 'c2', kind: 'principal', name: 'P', of: 'R1' },
-      { id: 'c3', kind: 'criterion', name: 'C', of: 'R1', theory: 'von-mises', strength: { Sy: '275 MPa' }, required: '1.5' },
+      { id: 'c3', kind: 'criterion', name: 'vonMises', of: 'R1', theory: 'von-mises', strength: { Sy: '275 MPa' }, required: '1.5' },
     ]),
   },
   {
@@ -98,7 +98,7 @@ export const BUILT_IN_DEMO_SHEETS: readonly DemoSheet[] = [
       {
         id: 'c3',
         kind: 'criterion',
-        name: 'C',
+        name: 'modifiedMohr',
         of: 'S',
         theory: 'modified-mohr',
         strength: { Sut: '210 MPa', Suc: '750 MPa' },
@@ -120,7 +120,7 @@ export const BUILT_IN_DEMO_SHEETS: readonly DemoSheet[] = [
       {
         id: 'c4',
         kind: 'criterion',
-        name: 'C',
+        name: 'mohrCoulomb',
         of: 'S',
         theory: 'mohr-coulomb',
         strength: { c: '12 kPa', phi: '30 deg' },

@@ -44,7 +44,7 @@ function curvesOf(geometry: EnvelopeGeometry, label: string): EnvelopeCurve[] {
 
 /**
  * The envelope figure of a criterion result on a plane state: the theory's outline in the
- * σA–σB plane for the cell's strengths, the state's point (p1, p2) and the load line to the
+ * σ1–σ2 plane for the cell's strengths, the state's point (p1, p2) and the load line to the
  * envelope. With `compare`, the outlines of the other theories the same strengths allow are
  * drawn too. Null for failed cells and for states that are not plane (the plot has no place
  * for them); Mohr-Coulomb's load line runs at its load factor.

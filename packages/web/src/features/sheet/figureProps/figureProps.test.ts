@@ -73,7 +73,7 @@ describe('envelopeFigureOf', () => {
     expect(figure.envelopes[0]!.label).toBe('von Mises (distortion energy), Sy = 36.26 ksi');
   });
 
-  it('has no σA–σB figure for a state with out-of-plane stress', () => {
+  it('has no σ1–σ2 figure for a state with out-of-plane stress', () => {
     expect(envelopeFigureOf(result('c3'), 'SI', false)).toBeNull();
   });
 });

@@ -69,7 +69,7 @@ describe('FailureEnvelope', () => {
     expect(Number(extension?.getAttribute('x2'))).toBeCloseTo(failure.x, 6);
     expect(Number(extension?.getAttribute('y2'))).toBeCloseTo(failure.y, 6);
     expect(screen.getByText('n = 2.50')).toBeTruthy();
-    expect(screen.getByText('(σA, σB) = (100, 50.0) MPa')).toBeTruthy();
+    expect(screen.getByText('(σ1, σ2) = (100, 50.0) MPa')).toBeTruthy();
   });
 
   it('keeps the envelope’s true shape: a square stays square', () => {

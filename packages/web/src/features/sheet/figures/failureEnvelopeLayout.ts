@@ -147,8 +147,8 @@ export function failureEnvelopeLayout(input: FailureEnvelopeInput): FailureEnvel
     },
     {
       unit,
-      xCaption: `σA (${unit.label})`,
-      yCaption: `σB (${unit.label})`,
+      xCaption: `σ1 (${unit.label})`,
+      yCaption: `σ2 (${unit.label})`,
       ySign: 1,
       fontSize: labelFontSize,
     },
@@ -223,7 +223,7 @@ export function failureEnvelopeLayout(input: FailureEnvelopeInput): FailureEnvel
     : Math.atan2(stressPoint.y - origin.y, stressPoint.x - origin.x);
   requests.push({
     id: 'point',
-    text: `(σA, σB) = (${v(point.sA)}, ${v(point.sB)}) ${unit.label}`,
+    text: `(σ1, σ2) = (${v(point.sA)}, ${v(point.sB)}) ${unit.label}`,
     x: stressPoint.x,
     y: stressPoint.y,
     // Beside the load line rather than along it.
@@ -288,7 +288,7 @@ export function failureEnvelopeLayout(input: FailureEnvelopeInput): FailureEnvel
   }));
 
   const description =
-    `Failure envelopes ${envelopes.map((e) => e.label).join(', ')} in the σA–σB plane; ` +
+    `Failure envelopes ${envelopes.map((e) => e.label).join(', ')} in the σ1–σ2 plane; ` +
     `stress point (${v(point.sA)}, ${v(point.sB)}) ${unit.label}; ${factorText}; ` +
     `${status === 'low-margin' ? 'low margin' : status}.`;
 

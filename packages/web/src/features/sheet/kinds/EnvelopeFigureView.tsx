@@ -9,7 +9,7 @@ import { useSheetSettings } from '../hooks/useSheetSettings';
 import type { KindViewProps } from './kindView';
 
 /**
- * The failure envelope of a criterion cell in the σA–σB plane: the theory's outline, the stress
+ * The failure envelope of a criterion cell in the σ1–σ2 plane: the theory's outline, the stress
  * point, the load line to the envelope with its factor, and the verdict. A toggle overlays the
  * other theories the same strengths allow. A state with out-of-plane stress has no place on
  * that plane; its three Mohr's circles are shown instead.
@@ -29,7 +29,7 @@ export function EnvelopeFigureView({ cell, cellName, result }: KindViewProps) {
       <figure className="m-0" data-figure-of={cell.id}>
         <MohrCircles3D s1={s1} s2={s2} s3={s3} unit={unit} shearAxis={shearAxis} title={`Mohr's circles checked by ${cellName}`} />
         <figcaption className="mt-1 text-[0.75rem] text-ink-muted">
-          The state has out-of-plane stress, so it has no point on the σA–σB envelope; the factor above
+          The state has out-of-plane stress, so it has no point on the σ1–σ2 envelope; the factor above
           is the theory's for all three principal stresses.
         </figcaption>
       </figure>
