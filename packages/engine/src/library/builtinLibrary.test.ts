@@ -11,6 +11,7 @@ import type { CellOk } from '../kinds/result';
 import { createEvaluator, type Evaluator } from '../sheet/createEvaluator';
 import { readSheet } from '../format/readSheet';
 import { MATERIAL_PROPERTY_KEYS, checkMaterialValues, materialRecordSchema, materialsLookupOf, type MaterialRecord } from './materialRecord';
+import { refCase, siFactor } from '../../test/fixtures/cases';
 import { applyTemplateParameters, checkTemplateParameters, templateParametersSchema, type TemplateParameter } from './templateParameters';
 
 const LIBRARY = new URL('../../../../library/', import.meta.url);
@@ -138,6 +139,34 @@ describe('built-in materials', () => {
     expect([text('gray-iron-astm40', 'Sut'), text('gray-iron-astm40', 'E'), text('gray-iron-astm40', 'nu')]).toEqual(['276 MPa', '117 GPa', '0.26']);
     expect(byId.get('gray-iron-astm40')?.properties.Sut?.basis).toBe('minimum');
     expect(text('gray-iron-astm30', 'nu')).toBe('0.26');
+  });
+
+  it('agree with the vetted reference cases that give the same materials (M-02, M-04, M-06)', () => {
+    const inUnit = (id: string, key: 'Sy' | 'Sut' | 'E' | 'nu', unit: string) => {
+      const text = byId.get(id)?.properties[key]?.value ?? '';
+      const [num, u] = text.split(' ');
+      const scale: Record<string, number> = { MPa: 1e6, GPa: 1e9 };
+      return (Number(num) * (u ? (scale[u] as number) : 1)) / siFactor(unit);
+    };
+    const expected = (caseId: string, key: string) => refCase(caseId).expected[key]!;
+    // M-02: Shigley's Mechanical Engineering Design, 9th ed., Table A-20, AISI 1018 CD (ASTM minimum): 370 / 440 MPa; E 207 GPa (Table A-5).
+    for (const [key, ref] of [['Sy', 'Sy_MPa'], ['Sut', 'Sut_MPa'], ['E', 'E_GPa']] as const) {
+      const e = expected('M-02', ref);
+      expect(inUnit('aisi-1018-cd', key, e.unit as string), `aisi-1018-cd.${key}`).toBeCloseTo(e.value as number, 9);
+    }
+    // M-04: ASTM A36 minimums 250 / 400 MPa, E 200 GPa (textbook tables; the ASTM limits in the case are from memory).
+    for (const [key, ref] of [['Sy', 'Sy_MPa'], ['Sut', 'Sut_MPa'], ['E', 'E_GPa']] as const) {
+      const e = expected('M-04', ref);
+      expect(inUnit('astm-a36', key, e.unit as string), `astm-a36.${key}`).toBeCloseTo(e.value as number, 9);
+    }
+    // The case's Poisson's ratios are textbook values (0.292, 0.32); the library takes handbook ones (0.29, 0.30).
+    expect(Math.abs(inUnit('aisi-1018-cd', 'nu', '-') - (expected('M-02', 'nu').value as number))).toBeLessThan(0.005);
+    expect(Math.abs(inUnit('astm-a36', 'nu', '-') - (expected('M-04', 'nu').value as number))).toBeLessThan(0.025);
+    // M-06: Philpot (2017) Table D.1, 6061-T6: 40 ksi (276 MPa) / 45 ksi (310 MPa), nu 0.33; the library lists the same
+    // Aluminum Association typical values, the yield rounded from 40 ksi = 275.8 MPa down to 275 MPa.
+    expect(Math.abs(inUnit('al-6061-t6', 'Sy', 'MPa') - (expected('M-06', 'alt_Philpot_Sy_MPa').value as number))).toBeLessThanOrEqual(1);
+    expect(inUnit('al-6061-t6', 'Sut', 'MPa')).toBeCloseTo(expected('M-06', 'alt_Philpot_Sut_MPa').value as number, 9);
+    expect(inUnit('al-6061-t6', 'nu', '-')).toBeCloseTo(expected('M-06', 'alt_Philpot_nu').value as number, 9);
   });
 
   it('label specification minimums as minimum, and give brittle irons Sut and Suc and soils c and phi', () => {
