@@ -43,8 +43,15 @@ describe('materials library', () => {
     const builtins = res.body.materials.filter((m) => m.builtin);
     expect(builtins.length).toBeGreaterThanOrEqual(15);
     const a36 = builtins.find((m) => m.id === 'astm-a36');
-    expect(a36?.properties.Sy).toEqual({ value: '250 MPa', basis: 'minimum', source: expect.stringMatching(/ASTM A36\/A36M-19, Table 3/) });
-    for (const m of builtins) for (const v of Object.values(m.properties)) expect(v?.source.length).toBeGreaterThan(10);
+    expect(a36?.properties.Sy).toEqual({ value: '250 MPa', basis: 'minimum', source: expect.stringMatching(/ASTM A36\/A36M-19, Table 3/), confirmed: true });
+    for (const m of builtins) {
+      for (const v of Object.values(m.properties)) {
+        expect(v?.source.length).toBeGreaterThan(10);
+        expect(typeof v?.confirmed, m.id).toBe('boolean');
+      }
+    }
+    // A value that could not be confirmed against its source says so, for the picker and the sheet to show.
+    expect(builtins.find((m) => m.id === 'ss-17-4ph-h1025')?.properties.Sy?.confirmed).toBe(false);
   });
 
   it('lets an engineer add and edit the organization’s own material, and refuses to edit a built-in', async () => {
