@@ -63,6 +63,17 @@ describe('templates and materials', () => {
     await expect.poll(() => check.innerText(), { timeout: 20_000 }).toMatch(/Pass/);
     expect(await check.innerText()).toMatch(/655 MPa[\s\S]*Shigley/);
 
+    // A material whose yield strength is not confirmed against its source: its option says so,
+    // and the check shows the caution under the values it uses.
+    const material = check.getByLabel(/^material of/);
+    expect(await material.locator('option', { hasText: '17-4 PH' }).innerText()).toMatch(/Sy source not confirmed/);
+    await material.selectOption('ss-17-4ph-h1025');
+    await expect.poll(() => check.innerText()).toMatch(/1000 MPa[\s\S]*unconfirmed[\s\S]*Caution, source not confirmed: Yield strength Sy was not confirmed/);
+    await check.scrollIntoViewIfNeeded();
+    await screenshot(page, 'sheet-material-unconfirmed');
+    await material.selectOption('aisi-4140-qt650');
+    await expect.poll(() => check.innerText()).not.toMatch(/Caution, source not confirmed/);
+
     const sheetId = page.url().split('/').pop() as string;
     const api = await page.evaluate(async (id) => (await fetch(`/api/sheets/${id}`)).json(), sheetId);
     expect(api.sheet.template).toEqual({ id: 'builtin:thin-walled-cylinder', version: 2 });
