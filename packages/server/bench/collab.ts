@@ -18,7 +18,6 @@ import { randomBytes } from 'node:crypto';
 import { performance } from 'node:perf_hooks';
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
-import pg from 'pg';
 import WebSocket from 'ws';
 import { WebsocketProvider } from 'y-websocket';
 import * as Y from 'yjs';
@@ -27,8 +26,11 @@ import * as encoding from 'lib0/encoding';
 import * as syncProtocol from 'y-protocols/sync';
 import { loadConfig } from '../src/config';
 import { collabServerOf } from '../src/collab/upgradeHandlers';
-import { cellText, docFromSheetContent, type SheetFileCell, type SheetFileContent } from '../src/collab/sheetDoc';
-import { migrateDatabase } from '../src/db/migrateDatabase';
+import { cellText, docFromSheetContent, type SheetFileContent } from '../src/collab/sheetDoc';
+import { benchSheet } from './support/benchSheet';
+import { openBenchDatabase } from './support/benchDatabase';
+import { signIn } from './support/signIn';
+import { percentile, socketClass, until } from './support/clients';
 import { createPasswordUser } from '../src/services/accounts';
 import { insertOrganization } from '../src/services/organizations';
 import { startServer, type RunningServer } from '../src/server';
@@ -42,26 +44,6 @@ process.setMaxListeners(500);
 setFlagsFromString('--expose-gc');
 const collectGarbage = runInNewContext('gc') as () => void;
 
-/** A sheet of realistic size: the lifting-lug example and forty more cells of each common kind. */
-function benchSheet(): SheetFileContent {
-  const cells: SheetFileCell[] = [
-    { id: 'k1', kind: 'note', text: 'Load case LC2, $F = 18\\,kN$ at 30°' },
-    { id: 'k2', kind: 'quantity', name: 'F', expr: '18 kN' },
-    { id: 'k3', kind: 'quantity', name: 'A', expr: '40 mm * 12 mm' },
-    { id: 'k4', kind: 'stress', name: 'S', sx: 'F / A', sy: '0 MPa', txy: '22 MPa' },
-    { id: 'k5', kind: 'rotate', name: 'R', of: 'S', angle: '30 deg' },
-    { id: 'k6', kind: 'principal', name: 'P', of: 'S' },
-    { id: 'k7', kind: 'criterion', name: 'C', of: 'S', theory: 'von-mises', strength: { Sy: '250 MPa' }, required: '1.5' },
-  ];
-  for (let index = 0; index < 40; index++) {
-    cells.push(
-      index % 2 === 0
-        ? { id: `q${index}`, kind: 'quantity', name: `L${index}`, expr: `${index + 1}.5 mm * 2` }
-        : { id: `s${index}`, kind: 'stress', name: `S${index}`, sx: `${index} MPa`, sy: '-4 MPa', txy: 'F / A / 3' },
-    );
-  }
-  return { format: 'sheaf-sheet', version: 1, title: 'Benchmark sheet', unitSystem: 'SI', cells };
-}
 
 interface Bench {
   running: RunningServer;
@@ -71,28 +53,6 @@ interface Bench {
   cookies: string[];
 }
 
-async function signIn(url: string, email: string): Promise<string> {
-  const jar = new Map<string, string>();
-  const keep = (response: Response): void => {
-    for (const line of response.headers.getSetCookie()) {
-      const pair = line.split(';')[0] ?? '';
-      const at = pair.indexOf('=');
-      if (at > 0) jar.set(pair.slice(0, at), pair.slice(at + 1));
-    }
-  };
-  const cookie = (): string => [...jar].map(([key, value]) => `${key}=${value}`).join('; ');
-  const csrf = await fetch(`${url}/api/auth/csrf`);
-  keep(csrf);
-  const { token } = (await csrf.json()) as { token: string };
-  const response = await fetch(`${url}/api/auth/signin`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', 'x-csrf-token': token, cookie: cookie(), origin: url },
-    body: JSON.stringify({ email, password: PASSWORD }),
-  });
-  keep(response);
-  if (response.status !== 200) throw new Error(`sign-in answered ${response.status}`);
-  return cookie();
-}
 
 async function createSheetRow(bench: Bench, content: SheetFileContent): Promise<string> {
   const rows = (await bench.running.deps.dataSource.query(
@@ -102,28 +62,8 @@ async function createSheetRow(bench: Bench, content: SheetFileContent): Promise<
   return rows[0]!.id;
 }
 
-/** A WebSocket class that sends the session cookie and an Origin, as a browser page would. */
-function socketClass(cookie: string, origin: string) {
-  return class extends WebSocket {
-    constructor(address: string, protocols?: string | string[]) {
-      super(address, protocols, { headers: { cookie, origin } });
-    }
-  };
-}
 
-function percentile(sorted: number[], fraction: number): number {
-  const index = Math.min(sorted.length - 1, Math.max(0, Math.ceil(fraction * sorted.length) - 1));
-  return sorted[index] ?? Number.NaN;
-}
 
-async function until(check: () => boolean, timeoutMs: number): Promise<boolean> {
-  const deadline = Date.now() + timeoutMs;
-  while (!check()) {
-    if (Date.now() > deadline) return false;
-    await new Promise((resolve) => setTimeout(resolve, 1));
-  }
-  return true;
-}
 
 async function latencyRun(bench: Bench, clientCount: number): Promise<{ samples: number[]; lost: number }> {
   const sheetId = await createSheetRow(bench, benchSheet());
@@ -213,23 +153,10 @@ async function memoryRun(bench: Bench): Promise<{ perRoomBytes: number; rooms: n
 }
 
 async function main(): Promise<void> {
-  const adminUrl = process.env.SHEAF_PG_ADMIN_URL ?? 'postgres://postgres@127.0.0.1:55432/postgres';
-  let databaseUrl = process.env.DATABASE_URL;
-  let created: string | null = null;
-  if (!databaseUrl) {
-    created = `sheaf_bench_${randomBytes(6).toString('hex')}`;
-    const admin = new pg.Client({ connectionString: adminUrl });
-    await admin.connect();
-    await admin.query(`CREATE DATABASE ${created}`);
-    await admin.end();
-    const parsed = new URL(adminUrl);
-    parsed.pathname = `/${created}`;
-    databaseUrl = parsed.toString();
-  }
+  const database = await openBenchDatabase('sheaf_bench');
   let running: RunningServer | undefined;
   try {
-    await migrateDatabase(databaseUrl);
-    const config = loadConfig({ NODE_ENV: 'test', HOST: '127.0.0.1', PORT: '0', DATABASE_URL: databaseUrl, LOG_LEVEL: 'silent' });
+    const config = loadConfig({ NODE_ENV: 'test', HOST: '127.0.0.1', PORT: '0', DATABASE_URL: database.url, LOG_LEVEL: 'silent' });
     running = await startServer(config, { rateLimits: { signInPerIp: 100_000, signInPerAccount: 100_000 } });
     const dataSource = running.deps.dataSource;
     const organization = await insertOrganization(dataSource.manager, `Bench ${randomBytes(3).toString('hex')}`);
@@ -241,7 +168,7 @@ async function main(): Promise<void> {
       const email = `bench-${index}-${randomBytes(4).toString('hex')}@bench.sheaf.test`;
       const user = await createPasswordUser(dataSource.manager, { email, password: PASSWORD, name: `Bench ${index}` });
       await dataSource.query(`INSERT INTO memberships (organization_id, user_id, role) VALUES ($1, $2, 'engineer')`, [organization.id, user.id]);
-      cookies.push(await signIn(running.url, email));
+      cookies.push(await signIn(running.url, email, PASSWORD));
     }
     const bench: Bench = { running, url: running.url, organizationId: organization.id, projectId: projectRows[0]!.id, cookies };
 
@@ -260,12 +187,7 @@ async function main(): Promise<void> {
     console.log(`stored updates: ${metrics.updatesStored}, compactions: ${metrics.compactions}, store failures: ${metrics.storeFailures}`);
   } finally {
     await running?.close();
-    if (created !== null) {
-      const admin = new pg.Client({ connectionString: adminUrl });
-      await admin.connect();
-      await admin.query(`DROP DATABASE IF EXISTS ${created} WITH (FORCE)`);
-      await admin.end();
-    }
+    await database.drop();
   }
 }
 
