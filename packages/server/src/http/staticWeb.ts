@@ -3,6 +3,8 @@ import { join } from 'node:path';
 import express, { Router } from 'express';
 import { renderPage } from './html';
 
+const INDEX = 'index.html';
+
 /** Paths the single-page app never answers: the server's own routes. */
 const SERVER_PREFIXES = ['/api', '/auth', '/fake-oauth', '/dev', '/fonts', '/collab'];
 
@@ -37,7 +39,7 @@ export function webAppRouter(webDist: string, fontsDir: string): Router {
       if (path.includes(`${join('/', 'assets')}/`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
     },
   });
-  const indexFile = join(webDist, 'index.html');
+  const indexFile = join(webDist, INDEX);
 
   router.use((req, res, next) => {
     if (isServerPath(req.path)) {
@@ -60,7 +62,18 @@ export function webAppRouter(webDist: string, fontsDir: string): Router {
         return;
       }
       res.setHeader('Cache-Control', 'no-cache');
-      res.sendFile(indexFile);
+      // `root` keeps the dot-file rule to the path inside the build: the project may itself sit
+      // under a folder whose name starts with a dot (~/.local/src/sheaf, say).
+      res.sendFile(INDEX, { root: webDist }, (error?: Error & { status?: number; statusCode?: number }) => {
+        if (error === undefined) return;
+        if (res.headersSent) {
+          next(error);
+          return;
+        }
+        // Removed between the check above and the read (a rebuild in progress): not found.
+        if ((error.status ?? error.statusCode) === 404) res.status(404).type('text/plain').send(`not found: ${req.path}`);
+        else next(error);
+      });
     });
   });
   return router;
