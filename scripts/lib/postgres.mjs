@@ -4,8 +4,9 @@
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync, chmodSync, lstatSync } from 'node:fs';
 import { join } from 'node:path';
-import { aptInstall, isRoot, run } from './run.mjs';
+import { aptInstall, isRoot, run, runAsync } from './run.mjs';
 import { step } from './log.mjs';
+import { isPortFree } from './singleInstance.mjs';
 
 const SERVER_USER = 'postgres';
 
@@ -84,62 +85,155 @@ function clusterHome(root) {
   return local;
 }
 
-export function clusterPaths(root) {
-  const home = join(root, '.data', 'pg');
-  return { home, data: join(home, 'data'), socket: join(home, 'run'), log: join(home, 'server.log') };
+/** The folders of a cluster living in `home`: data, socket folder, server log. */
+export function clusterPathsIn(home) {
+  return { home, data: join(home, 'data'), socket: join(home, 'run'), log: join(home, 'server.log'), portFile: join(home, 'port') };
 }
 
-export function pgPort() {
-  return Number(process.env.PGPORT ?? 55432);
+export function clusterPaths(root) {
+  return clusterPathsIn(join(root, '.data', 'pg'));
 }
+
+export const DEFAULT_PGPORT = 55432;
 
 /** True when the cluster's postmaster answers. */
-export function isClusterRunning(bin, root) {
-  const { data } = clusterPaths(root);
-  if (!existsSync(join(data, 'PG_VERSION'))) return false;
-  return asServerUser(bin, 'pg_ctl', ['-D', data, 'status'], { quiet: true, allowFail: true }).status === 0;
+function isRunning(bin, paths) {
+  if (!existsSync(join(paths.data, 'PG_VERSION'))) return false;
+  return asServerUser(bin, 'pg_ctl', ['-D', paths.data, 'status'], { quiet: true, allowFail: true }).status === 0;
+}
+
+/** The port a running cluster listens on (line 4 of postmaster.pid), or null. */
+function runningPort(paths) {
+  const pidFile = join(paths.data, 'postmaster.pid');
+  if (!existsSync(pidFile)) return null;
+  const port = Number(readFileSync(pidFile, 'utf8').split('\n')[3]);
+  return Number.isInteger(port) && port > 0 ? port : null;
+}
+
+function initCluster(bin, paths) {
+  mkdirSync(paths.socket, { recursive: true });
+  if (!existsSync(join(paths.data, 'PG_VERSION'))) {
+    step(`creating the PostgreSQL cluster in ${paths.data}`);
+    mkdirSync(paths.data, { recursive: true });
+    chmodSync(paths.data, 0o700);
+    chownTo(paths.home);
+    asServerUser(bin, 'initdb', ['-D', paths.data, '-U', 'postgres', '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8'], { quiet: true });
+  }
+  chownTo(paths.socket);
+}
+
+async function firstFreePort(from) {
+  for (let port = from; port < from + 200 && port <= 65535; port += 1) {
+    if (await isPortFree(port, '127.0.0.1')) return port;
+  }
+  throw new Error(`no free port between ${from} and ${from + 199} on 127.0.0.1`);
 }
 
 /**
- * Initialises (once) and starts the project cluster. Returns {url, adminUrl, startedHere}.
- * `startedHere` is false when the cluster was already running (another `npm start` or test run).
+ * The port to start a stopped cluster on. `PGPORT` when set (an error naming it when another
+ * program holds it); otherwise the port this cluster used last, or 55432, or — when another
+ * program (another checkout's cluster, say) holds that — the next free one, remembered for next time.
  */
-export function startCluster(root) {
+async function choosePort(paths, requested) {
+  if (requested !== undefined) {
+    if (await isPortFree(requested, '127.0.0.1')) return requested;
+    throw new Error(
+      `port ${requested} on 127.0.0.1 (PGPORT) is taken by another program — another checkout's PostgreSQL, perhaps. ` +
+        'Set PGPORT to a free port, or leave PGPORT unset and a free one is picked.',
+    );
+  }
+  const remembered = existsSync(paths.portFile) ? Number(readFileSync(paths.portFile, 'utf8').trim()) : NaN;
+  const preferred = Number.isInteger(remembered) && remembered > 0 ? remembered : DEFAULT_PGPORT;
+  if (await isPortFree(preferred, '127.0.0.1')) return preferred;
+  const picked = await firstFreePort(Math.max(preferred, DEFAULT_PGPORT) + 1);
+  step(`port ${preferred} on 127.0.0.1 is taken by another program (another checkout's PostgreSQL?): using ${picked}`);
+  return picked;
+}
+
+function requestedPort() {
+  if (process.env.PGPORT === undefined || process.env.PGPORT === '') return undefined;
+  const port = Number(process.env.PGPORT);
+  if (!Number.isInteger(port) || port < 1 || port > 65535) throw new Error(`PGPORT: "${process.env.PGPORT}" is not a port number`);
+  return port;
+}
+
+/**
+ * Initialises (once) and starts the cluster living in `home` on 127.0.0.1. `port` asks for a
+ * port (an error when taken); without it the port is chosen as `choosePort` says. A cluster that
+ * is already running is used as it is, on the port it listens on.
+ * Returns {bin, port, base, adminUrl, startedHere}.
+ */
+export async function startClusterIn(home, { port: requested } = {}) {
   const bin = ensurePgInstalled();
   ensureServerUser();
-  clusterHome(root);
-  const { home, data, socket, log } = clusterPaths(root);
-  const port = pgPort();
-  mkdirSync(socket, { recursive: true });
-  if (!existsSync(join(data, 'PG_VERSION'))) {
-    step(`creating the PostgreSQL cluster in ${data}`);
-    mkdirSync(data, { recursive: true });
-    chmodSync(data, 0o700);
-    chownTo(home);
-    asServerUser(bin, 'initdb', ['-D', data, '-U', 'postgres', '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8'], { quiet: true });
-  }
-  chownTo(socket);
+  const paths = clusterPathsIn(home);
+  initCluster(bin, paths);
   let startedHere = false;
-  if (!isClusterRunning(bin, root)) {
+  let port = isRunning(bin, paths) ? runningPort(paths) : null;
+  if (port === null) {
+    port = await choosePort(paths, requested);
     step(`starting PostgreSQL on 127.0.0.1:${port}`);
-    const opts = `-k ${socket} -p ${port} -c listen_addresses=127.0.0.1`;
+    const opts = `-k ${paths.socket} -p ${port} -c listen_addresses=127.0.0.1`;
     // pg_ctl removes a stale postmaster.pid left by a killed server by itself.
-    const res = asServerUser(bin, 'pg_ctl', ['-D', data, '-l', log, '-w', '-t', '60', '-o', opts, 'start'], { quiet: true, allowFail: true });
+    const res = asServerUser(bin, 'pg_ctl', ['-D', paths.data, '-l', paths.log, '-w', '-t', '60', '-o', opts, 'start'], { quiet: true, allowFail: true });
     if (res.status !== 0) {
-      const tail = existsSync(log) ? readFileSync(log, 'utf8').split('\n').slice(-15).join('\n') : '';
+      const tail = existsSync(paths.log) ? readFileSync(paths.log, 'utf8').split('\n').slice(-15).join('\n') : '';
       throw new Error(`PostgreSQL did not start on port ${port}:\n${res.stdout}${res.stderr}\n${tail}`);
     }
+    writeFileSync(paths.portFile, String(port));
     startedHere = true;
+  } else if (requested !== undefined && requested !== port) {
+    step(`PostgreSQL of this checkout already runs on port ${port} (not PGPORT=${requested}): using it`);
   }
   const base = `postgres://postgres@127.0.0.1:${port}`;
-  return { bin, base, adminUrl: `${base}/postgres`, startedHere };
+  return { bin, port, base, adminUrl: `${base}/postgres`, startedHere };
+}
+
+/**
+ * Initialises (once) and starts the project cluster (.data/pg) on PGPORT, or on a free port when
+ * PGPORT is unset and 55432 is taken. Returns {bin, port, base, adminUrl, startedHere};
+ * `startedHere` is false when it was already running (another `npm start` or test run).
+ */
+export async function startCluster(root) {
+  ensureServerUser();
+  clusterHome(root);
+  return startClusterIn(clusterPaths(root).home, { port: requestedPort() });
+}
+
+/**
+ * `pg_ctl stop|start|restart -m fast -w` on a cluster that has run before, without blocking the
+ * event loop (a server in the same process goes on meanwhile). A fast stop ends every connection,
+ * as a real restart or failover does. Resolves once pg_ctl is done.
+ */
+export async function controlClusterIn(home, action) {
+  const bin = findPgBinDir();
+  const paths = clusterPathsIn(home);
+  const port = action === 'start' ? Number(readFileSync(paths.portFile, 'utf8').trim()) : runningPort(paths);
+  const opts = `-k ${paths.socket} -p ${port} -c listen_addresses=127.0.0.1`;
+  const args = ['-D', paths.data, '-l', paths.log, '-m', 'fast', '-w', '-t', '60', '-o', opts, action];
+  const exe = join(bin, 'pg_ctl');
+  const { done } = isRoot() ? runAsync('runuser', ['-u', SERVER_USER, '--', exe, ...args], { stdio: 'ignore' }) : runAsync(exe, args, { stdio: 'ignore' });
+  const status = await done;
+  if (status !== 0) throw new Error(`pg_ctl ${action} exited with ${status}; see ${paths.log}`);
+}
+
+export function stopClusterIn(home) {
+  const bin = findPgBinDir();
+  const paths = clusterPathsIn(home);
+  if (!bin || !isRunning(bin, paths)) return;
+  step('stopping PostgreSQL');
+  asServerUser(bin, 'pg_ctl', ['-D', paths.data, '-m', 'fast', '-w', 'stop'], { quiet: true, allowFail: true });
 }
 
 export function stopCluster(root) {
-  const bin = findPgBinDir();
-  if (!bin || !isClusterRunning(bin, root)) return;
-  step('stopping PostgreSQL');
-  asServerUser(bin, 'pg_ctl', ['-D', clusterPaths(root).data, '-m', 'fast', '-w', 'stop'], { quiet: true, allowFail: true });
+  stopClusterIn(clusterPaths(root).home);
+}
+
+/** Makes a folder the server user may write (the cluster of a test lives in one). */
+export function giveToServerUser(dir) {
+  ensureServerUser();
+  chmodSync(dir, 0o755);
+  chownTo(dir);
 }
 
 /** Runs SQL against a server with psql from the same installation. */

@@ -25,12 +25,12 @@ export function claimInstance(root) {
   return { release: () => rmSync(file, { force: true }) };
 }
 
-/** Resolves true when nothing listens on the port. */
-export function isPortFree(port) {
+/** Resolves true when nothing listens on the port (on `host`, or on every interface). */
+export function isPortFree(port, host) {
   return new Promise((resolve) => {
     const probe = createServer();
     probe.once('error', () => resolve(false));
     probe.once('listening', () => probe.close(() => resolve(true)));
-    probe.listen(port);
+    probe.listen(port, host);
   });
 }

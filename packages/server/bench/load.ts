@@ -17,7 +17,6 @@
  */
 import 'reflect-metadata';
 import { randomBytes } from 'node:crypto';
-import { createServer } from 'node:net';
 import { loadavg } from 'node:os';
 import { DataSource } from 'typeorm';
 import { dataSourceOptions } from '../src/db/options';
@@ -29,6 +28,7 @@ import { benchSheet } from './support/benchSheet';
 import { loadRoute, type HttpRun } from './support/httpLoad';
 import { startServerProcess, type ServerProcess } from './support/serverProcess';
 import { runEditors, type EditorScenario } from './support/wsLoad';
+import { freePort } from '../test/helpers/throwawayCluster';
 
 const PASSWORD = 'benchmark password, long enough';
 // Every y-websocket client listens for the process's exit.
@@ -41,17 +41,6 @@ const WS_SECONDS = Number(process.env.BENCH_WS_SECONDS ?? 15);
 const ONLY = process.env.BENCH_ONLY ?? 'all';
 /** A production server behind one proxy: requests say they came over https, so secure cookies work. */
 const FORWARDED = { 'x-forwarded-proto': 'https' };
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as { port: number };
-      probe.close(() => resolve(port));
-    });
-  });
-}
 
 const ms = (value: number): string => value.toFixed(1).padStart(6);
 const mib = (bytes: number): string => `${(bytes / 1024 / 1024).toFixed(0)} MiB`;

@@ -64,7 +64,8 @@ export function createApp(deps: AppDeps): Express {
         res.setHeader('x-request-id', id);
         return id;
       },
-      customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : 'info'),
+      // 503 is the database being away for a moment (logged once by the error middleware).
+      customLogLevel: (_req, res, error) => (res.statusCode === 503 ? 'warn' : error || res.statusCode >= 500 ? 'error' : 'info'),
     }),
   );
   app.use(securityHeaders(production));

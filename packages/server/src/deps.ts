@@ -6,7 +6,7 @@ import connectPgSimple from 'connect-pg-simple';
 import pg from 'pg';
 import { DataSource } from 'typeorm';
 import { fakesAllowed, type Config } from './config';
-import { dataSourceOptions } from './db/options';
+import { CONNECT_TIMEOUT_MS, dataSourceOptions } from './db/options';
 import { SmtpInbox } from './fakes/smtpInbox';
 import { DEFAULT_FAKE_ACCOUNTS, type FakeOAuthAccount } from './fakes/oauthAccounts';
 import { createLogger, type Logger } from './logger';
@@ -84,14 +84,44 @@ export interface ResourceOverrides {
 /** The long-lived parts of a server: database, session store, mail. */
 export type Resources = Omit<AppDeps, 'urls' | 'version'> & { close(): Promise<void> };
 
+/**
+ * The app's role should be neither a superuser nor the owner of the tables: either could change
+ * an issued revision or switch off the trigger that guards it (`npm run db:roles` sets up the two
+ * roles). Said loudly at start; the server runs all the same.
+ */
+async function warnAboutPowerfulRole(dataSource: DataSource, logger: Logger, production: boolean): Promise<void> {
+  const rows: Array<{ role: string; superuser: boolean; owns_revisions: boolean | null }> = await dataSource.query(
+    `SELECT current_user AS role, r.rolsuper AS superuser,
+            (SELECT c.relowner = r.oid FROM pg_class c WHERE c.oid = to_regclass('revisions')) AS owns_revisions
+       FROM pg_roles r WHERE r.rolname = current_user`,
+  );
+  const facts = rows[0];
+  if (facts === undefined || (!facts.superuser && !facts.owns_revisions)) return;
+  const what = facts.superuser ? 'a superuser' : 'the owner of the tables';
+  const message = `the server connects to PostgreSQL as ${facts.role}, ${what}: issued revisions are not protected from it; connect as the app role (npm run db:roles)`;
+  if (production) logger.error({ role: facts.role }, message);
+  else logger.warn({ role: facts.role }, message);
+}
+
 /** Opens the database, the session store and the mail transport (starting the fake SMTP where allowed). */
 export async function openResources(config: Config, overrides: ResourceOverrides = {}): Promise<Resources> {
   const logger = overrides.logger ?? createLogger(config.logLevel);
   const ownsDataSource = !overrides.dataSource;
-  const dataSource = overrides.dataSource ?? new DataSource(dataSourceOptions(config.databaseUrl));
+  // A restart of PostgreSQL ends every idle connection with an error event; without a listener
+  // that event would stop the process. The pools drop such connections and open new ones.
+  const onPoolError = (pool: string) => (error: Error & { code?: string }) =>
+    logger.warn({ pool, error: error.message, code: error.code }, 'a pooled database connection ended; the pool opens a new one when needed');
+  const dataSource = overrides.dataSource ?? new DataSource(dataSourceOptions(config.databaseUrl, 10, onPoolError('app')));
   if (!dataSource.isInitialized) await dataSource.initialize();
+  await warnAboutPowerfulRole(dataSource, logger, config.nodeEnv === 'production');
 
-  const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, application_name: 'sheaf-sessions' });
+  const sessionPool = new pg.Pool({
+    connectionString: config.databaseUrl,
+    max: 5,
+    application_name: 'sheaf-sessions',
+    connectionTimeoutMillis: CONNECT_TIMEOUT_MS,
+  });
+  sessionPool.on('error', onPoolError('sessions'));
   const PgStore = connectPgSimple(session);
   const sessionStore = new PgStore({
     pool: sessionPool,

@@ -43,3 +43,25 @@ export const COLLAB_CLOSE_REASON: Readonly<Record<CollabCloseCode, string>> = {
 export function isFinalCloseCode(code: number): boolean {
   return code >= 4400 && code < 4500;
 }
+
+/**
+ * Messages of our own on the co-editing socket, beside y-websocket's (0 sync, 1 awareness, 2 auth,
+ * 3 query awareness). Each is varUint-encoded: the type, then its payload.
+ *
+ * `saving` (payload: one `SAVING_STATE`) says whether the room can store edits. Every edit is
+ * stored before anyone else sees it; while the database cannot be reached, edits wait in the
+ * server's memory up to a bound, and then the room says `paused`: it is read-only for now, takes
+ * no edits, and the client should stop editing and keep what it has. `resumed` follows as soon as
+ * storing works again, together with a sync request, so the client sends whatever the room lacks
+ * and nothing typed is lost. A client that connects while saving is paused is told at once.
+ */
+export const COLLAB_MESSAGE = {
+  saving: 100,
+} as const;
+
+export const SAVING_STATE = {
+  resumed: 0,
+  paused: 1,
+} as const;
+
+export type SavingState = (typeof SAVING_STATE)[keyof typeof SAVING_STATE];

@@ -51,6 +51,8 @@ export const ERROR_CODES = [
   'too-large',
   'rate-limited',
   'internal',
+  'unavailable',
+  'integrity',
 ] as const;
 export const ErrorCode = z.enum(ERROR_CODES);
 export type ErrorCode = z.infer<typeof ErrorCode>;

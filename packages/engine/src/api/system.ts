@@ -1,12 +1,15 @@
 import { z } from 'zod';
 import { Timestamp } from './common';
 
-/** `GET /api/health`. */
+/**
+ * `GET /api/health`: 200 with this body while the database answers; 503 `unavailable` (with
+ * Retry-After) while it does not.
+ */
 export const HealthResponse = z
   .object({
     status: z.literal('ok'),
     version: z.string(),
-    db: z.object({ roundTripMs: z.number() }),
+    db: z.object({ state: z.literal('up'), roundTripMs: z.number() }),
   })
   .meta({ id: 'HealthResponse' });
 export type HealthResponse = z.infer<typeof HealthResponse>;

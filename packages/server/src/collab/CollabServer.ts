@@ -10,7 +10,7 @@ import type * as Y from 'yjs';
 import { COLLAB_CLOSE, COLLAB_CLOSE_REASON, type CollabCloseCode } from './closeCodes';
 import { createCollabMetrics, type CollabLogger, type CollabMetrics } from './collabMetrics';
 import { SheetGoneError, type RoomPersistence } from './roomPersistence';
-import { SheetRoom, type ConnectionIdentity, type RoomOptions } from './SheetRoom';
+import { DEFAULT_UNSAVED_BOUNDS, SheetRoom, type ConnectionIdentity, type RoomOptions, type UnsavedBounds } from './SheetRoom';
 import { sheetContentFromDoc, type SheetFileContent } from './sheetDoc';
 
 export interface CollabServerOptions {
@@ -22,6 +22,8 @@ export interface CollabServerOptions {
   compactAfterIdleMs?: number;
   /** Longest wait between two attempts to store an update (default 5 s). */
   maxStoreRetryDelayMs?: number;
+  /** Bounds on edits waiting in memory to be stored, per room (DEFAULT_UNSAVED_BOUNDS). */
+  unsaved?: Partial<UnsavedBounds>;
   /** Largest websocket message accepted (default 16 MiB: a sheet with inline point rows is big). */
   maxMessageBytes?: number;
   /**
@@ -58,15 +60,20 @@ export class CollabServer {
       compactAfterUpdates: options.compactAfterUpdates ?? 200,
       compactAfterIdleMs: options.compactAfterIdleMs ?? 10_000,
       maxStoreRetryDelayMs: options.maxStoreRetryDelayMs ?? 5_000,
+      unsaved: { ...DEFAULT_UNSAVED_BOUNDS, ...options.unsaved },
     };
   }
 
   /** Change the compaction, retry and ping settings, for open rooms too (tests and benchmarks tune these). */
   configure(
-    settings: Partial<Pick<RoomOptions, 'compactAfterUpdates' | 'compactAfterIdleMs' | 'maxStoreRetryDelayMs'>> & { pingIntervalMs?: number },
+    settings: Partial<Pick<RoomOptions, 'compactAfterUpdates' | 'compactAfterIdleMs' | 'maxStoreRetryDelayMs'>> & {
+      pingIntervalMs?: number;
+      unsaved?: Partial<UnsavedBounds>;
+    },
   ): void {
-    const { pingIntervalMs, ...room } = settings;
+    const { pingIntervalMs, unsaved, ...room } = settings;
     Object.assign(this.roomOptions, room);
+    if (unsaved !== undefined) Object.assign(this.roomOptions.unsaved, unsaved);
     if (pingIntervalMs !== undefined && !this.closing) {
       clearInterval(this.pinger);
       this.pinger = setInterval(() => this.pingAll(), pingIntervalMs);

@@ -5,24 +5,28 @@
  * Durability rule: an update from a writer is appended to the update log in PostgreSQL before it
  * is applied to the room's document, so nothing reaches another client (or a sync step 2 answer)
  * before it is stored (StoreThenApplyQueue). A failed append is retried with backoff, forever;
- * the update waits in memory meanwhile and nothing queued behind it is relayed either.
+ * the update waits in memory meanwhile and nothing queued behind it is relayed either. What waits
+ * is bounded: past the bound the room pauses saving (read-only for now, every client told) and
+ * resumes, asking every writer for what it lacks, once the backlog is stored.
  */
 import WebSocket from 'ws';
 import * as awarenessProtocol from 'y-protocols/awareness';
 import * as Y from 'yjs';
 import type { AwarenessUser } from './awarenessUser';
 import { stampAwarenessEntries } from './awarenessUser';
+import { SAVING_STATE } from '@sheaf/sheet-doc';
 import { COLLAB_CLOSE, COLLAB_CLOSE_REASON, type CollabCloseCode } from './closeCodes';
 import { sheetMeta } from './sheetDoc';
 import type { CollabLogger, CollabMetrics } from './collabMetrics';
-import { SheetLockedError, type LoggedUpdate, type RoomPersistence, type SheetLockState } from './roomPersistence';
-import { StoreThenApplyQueue } from './StoreThenApplyQueue';
+import { SavingPausedError, SheetLockedError, type LoggedUpdate, type RoomPersistence, type SheetLockState } from './roomPersistence';
+import { StoreThenApplyQueue, type Backlog } from './StoreThenApplyQueue';
 import { changesNothing } from './updateNovelty';
 import {
   awarenessMessage,
   decodeAwarenessUpdate,
   decodeClientMessage,
   encodeAwarenessUpdate,
+  savingMessage,
   syncStep1Message,
   syncStep2Message,
   updateMessage,
@@ -47,7 +51,22 @@ export interface RoomOptions {
   compactAfterIdleMs: number;
   /** Longest wait between two attempts to store an update. */
   maxStoreRetryDelayMs: number;
+  /** Bounds on the edits waiting in memory to be stored; past one, saving pauses (see SheetRoom). */
+  unsaved: UnsavedBounds;
 }
+
+/**
+ * How much may wait in memory, unsaved, before the room pauses saving: a number of updates or of
+ * bytes (whatever the database is doing), or a time during which storing keeps failing.
+ */
+export interface UnsavedBounds {
+  maxUpdates: number;
+  maxBytes: number;
+  /** Pause once storing has failed for this long, so people learn soon that nothing is saved. */
+  maxFailingMs: number;
+}
+
+export const DEFAULT_UNSAVED_BOUNDS: UnsavedBounds = { maxUpdates: 5_000, maxBytes: 8 * 1024 * 1024, maxFailingMs: 10_000 };
 
 interface Connection {
   socket: WebSocket;
@@ -79,6 +98,8 @@ export class SheetRoom {
   private gone = false;
   /** In check: nobody writes, whatever their role. */
   private locked: boolean;
+  /** The backlog reached its bound while the log could not be written: edits are turned away. */
+  private savingPaused = false;
 
   private constructor(
     readonly sheetId: string,
@@ -97,6 +118,7 @@ export class SheetRoom {
       (batch) => this.applyStored(batch),
       () => this.closeAsGone(),
       (batch) => this.refuseLocked(batch),
+      (backlog) => this.followBacklog(backlog),
     );
     this.awareness = new awarenessProtocol.Awareness(this.doc);
     // The server has no presence of its own.
@@ -138,6 +160,11 @@ export class SheetRoom {
     }
   }
 
+  /** True while saving is paused: the room takes no edits until the backlog is stored. */
+  get isSavingPaused(): boolean {
+    return this.savingPaused;
+  }
+
   /** True while updates wait to be stored or a compaction runs. */
   get busy(): boolean {
     return this.queue.pending || this.compacting !== null;
@@ -155,7 +182,8 @@ export class SheetRoom {
     socket.on('close', () => this.removeConnection(connection));
     // Ask a writer for what it has that the room lacks (offline edits). A read-only client is not
     // asked (nor anyone while the sheet is in check): its answer would be dropped anyway.
-    if (identity.writable && !this.locked) this.send(connection, syncStep1Message(this.doc));
+    if (identity.writable && !this.locked && !this.savingPaused) this.send(connection, syncStep1Message(this.doc));
+    if (this.savingPaused) this.send(connection, savingMessage(SAVING_STATE.paused));
     const present = [...this.awareness.getStates().keys()];
     if (present.length > 0) this.send(connection, awarenessMessage(this.awareness, present));
     for (const data of earlier) this.handleMessage(connection, data);
@@ -179,6 +207,7 @@ export class SheetRoom {
   async applyServerEdit(edit: (doc: Y.Doc) => void, userId: string | null): Promise<void> {
     if (this.destroyed) throw new Error(`applyServerEdit: the room of sheet ${this.sheetId} is closed`);
     if (this.locked) throw new SheetLockedError(this.sheetId);
+    if (this.savingPaused) throw new SavingPausedError(this.sheetId);
     const copy = new Y.Doc();
     Y.applyUpdate(copy, Y.encodeStateAsUpdate(this.doc));
     const before = Y.encodeStateVector(copy);
@@ -223,6 +252,11 @@ export class SheetRoom {
             this.options.metrics.readOnlyUpdatesDropped++;
             return;
           }
+          if (this.savingPaused) {
+            // Its sender keeps it and sends it again when saving resumes (asked by sync step 1).
+            this.options.metrics.updatesTurnedAway++;
+            return;
+          }
           this.enqueue(message.update, connection, connection.identity.user.id);
           return;
         case 'awareness':
@@ -251,7 +285,48 @@ export class SheetRoom {
     if (changesNothing(this.doc, update)) return null;
     const entry: QueuedUpdate = { update, origin, userId };
     this.queue.push(entry);
+    this.followBacklog(this.queue.backlog);
     return entry;
+  }
+
+  /** Pause saving once the backlog passes a bound; resume once it is all stored. */
+  private followBacklog(backlog: Backlog): void {
+    if (this.destroyed) return;
+    const bounds = this.options.unsaved;
+    if (this.savingPaused) {
+      if (backlog.updates === 0) this.resumeSaving();
+      return;
+    }
+    const failingMs = backlog.failingSince === null ? 0 : Date.now() - backlog.failingSince;
+    if (backlog.updates > bounds.maxUpdates || backlog.bytes > bounds.maxBytes || failingMs >= bounds.maxFailingMs) {
+      this.pauseSaving(backlog, failingMs);
+    }
+  }
+
+  private pauseSaving(backlog: Backlog, failingMs: number): void {
+    this.savingPaused = true;
+    this.options.metrics.savingPauses++;
+    this.options.logger.warn(
+      { sheetId: this.sheetId, updates: backlog.updates, bytes: backlog.bytes, failingMs },
+      'pausing saving: edits waiting to be stored reached their bound; the room is read-only until they are stored',
+    );
+    this.broadcast(savingMessage(SAVING_STATE.paused));
+  }
+
+  /** Everything waiting is stored: edits are taken again, and writers send what the room lacks. */
+  private resumeSaving(): void {
+    this.savingPaused = false;
+    this.options.logger.info({ sheetId: this.sheetId }, 'saving resumed');
+    this.broadcast(savingMessage(SAVING_STATE.resumed));
+    if (this.locked) return;
+    const ask = syncStep1Message(this.doc);
+    for (const connection of this.connections.values()) {
+      if (connection.identity.writable) this.send(connection, ask);
+    }
+  }
+
+  private broadcast(message: Uint8Array): void {
+    for (const connection of this.connections.values()) this.send(connection, message);
   }
 
   /** Stored: now the room may apply them, which relays each to every other connection. */

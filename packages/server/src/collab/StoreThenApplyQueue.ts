@@ -18,16 +18,29 @@ export interface StoreThenApplyOptions {
   maxStoreRetryDelayMs: number;
 }
 
+/** What waits in memory, unsaved: how many updates, how many bytes, and since when the store fails. */
+export interface Backlog {
+  updates: number;
+  bytes: number;
+  /** When the first failed attempt to store the oldest waiting batch was made; null while storing works. */
+  failingSince: number | null;
+}
+
 export class StoreThenApplyQueue<Entry extends LoggedUpdate> {
   private readonly queue: Entry[] = [];
   private draining: Promise<void> | null = null;
   private gone = false;
+  private waitingUpdates = 0;
+  private waitingBytes = 0;
+  private failingSince: number | null = null;
 
   /**
    * @param applyStored receives each stored batch, in order
    * @param onGone runs once if the sheet turns out to be deleted; the queue then drops everything
    * @param onRefused receives a batch the log refused because the sheet is in check: it was
    *   neither stored nor applied, so nobody else ever saw it
+   * @param onBacklog hears after every failed attempt to store, and once everything waiting has
+   *   been stored (with an empty backlog)
    */
   constructor(
     private readonly sheetId: string,
@@ -35,6 +48,7 @@ export class StoreThenApplyQueue<Entry extends LoggedUpdate> {
     private readonly applyStored: (batch: readonly Entry[]) => void,
     private readonly onGone: () => void,
     private readonly onRefused: (batch: readonly Entry[]) => void = () => undefined,
+    private readonly onBacklog: (backlog: Backlog) => void = () => undefined,
   ) {}
 
   /** True while updates wait to be stored. */
@@ -42,9 +56,16 @@ export class StoreThenApplyQueue<Entry extends LoggedUpdate> {
     return this.queue.length > 0 || this.draining !== null;
   }
 
+  /** Updates received and not yet stored (queued or being stored). */
+  get backlog(): Backlog {
+    return { updates: this.waitingUpdates, bytes: this.waitingBytes, failingSince: this.failingSince };
+  }
+
   push(entry: Entry): void {
     if (this.gone) return;
     this.queue.push(entry);
+    this.waitingUpdates++;
+    this.waitingBytes += entry.update.byteLength;
     this.startDraining();
   }
 
@@ -68,6 +89,7 @@ export class StoreThenApplyQueue<Entry extends LoggedUpdate> {
       try {
         await this.storeWithRetry(batch);
       } catch (error) {
+        this.settled(batch);
         if (error instanceof SheetLockedError) {
           this.onRefused(batch);
           continue;
@@ -76,11 +98,21 @@ export class StoreThenApplyQueue<Entry extends LoggedUpdate> {
         // Deleted while open: its edits have nowhere to go.
         this.gone = true;
         this.queue.length = 0;
+        this.waitingUpdates = 0;
+        this.waitingBytes = 0;
         this.onGone();
         return;
       }
+      this.settled(batch);
       this.applyStored(batch);
     }
+    if (this.queue.length === 0) this.onBacklog(this.backlog);
+  }
+
+  private settled(batch: readonly Entry[]): void {
+    this.failingSince = null;
+    this.waitingUpdates -= batch.length;
+    for (const entry of batch) this.waitingBytes -= entry.update.byteLength;
   }
 
   private async storeWithRetry(batch: readonly Entry[]): Promise<void> {
@@ -94,6 +126,8 @@ export class StoreThenApplyQueue<Entry extends LoggedUpdate> {
       } catch (error) {
         if (error instanceof SheetGoneError || error instanceof SheetLockedError) throw error;
         this.options.metrics.storeFailures++;
+        this.failingSince ??= Date.now();
+        this.onBacklog(this.backlog);
         const delayMs = Math.min(this.options.maxStoreRetryDelayMs, 50 * 2 ** Math.min(attempt, 16));
         this.options.logger.error(
           { err: error, sheetId: this.sheetId, updates: updates.length, attempt, retryInMs: delayMs },

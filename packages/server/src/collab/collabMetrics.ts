@@ -10,6 +10,10 @@ export interface CollabMetrics {
   updatesStored: number;
   /** Failed attempts to append to the update log (each is retried; nothing is relayed before it is stored). */
   storeFailures: number;
+  /** Times a room paused saving because edits waiting to be stored reached their bound. */
+  savingPauses: number;
+  /** Updates from writers turned away while saving was paused (their senders resend them on resume). */
+  updatesTurnedAway: number;
   /** Compactions of the update log into the sheet's state. */
   compactions: number;
   compactionFailures: number;
@@ -24,6 +28,8 @@ export function createCollabMetrics(): CollabMetrics {
     readOnlyUpdatesDropped: 0,
     updatesStored: 0,
     storeFailures: 0,
+    savingPauses: 0,
+    updatesTurnedAway: 0,
     compactions: 0,
     compactionFailures: 0,
     roomsLoaded: 0,

@@ -7,6 +7,7 @@ import * as encoding from 'lib0/encoding';
 import * as awarenessProtocol from 'y-protocols/awareness';
 import * as syncProtocol from 'y-protocols/sync';
 import type * as Y from 'yjs';
+import { COLLAB_MESSAGE, type SavingState } from '@sheaf/sheet-doc';
 
 export const MESSAGE_SYNC = 0;
 export const MESSAGE_AWARENESS = 1;
@@ -55,6 +56,14 @@ export function syncStep2Message(doc: Y.Doc, stateVector: Uint8Array): Uint8Arra
   const encoder = encoding.createEncoder();
   encoding.writeVarUint(encoder, MESSAGE_SYNC);
   syncProtocol.writeSyncStep2(encoder, doc, stateVector);
+  return encoding.toUint8Array(encoder);
+}
+
+/** The room's saving state (`COLLAB_MESSAGE.saving`, see @sheaf/sheet-doc). */
+export function savingMessage(state: SavingState): Uint8Array {
+  const encoder = encoding.createEncoder();
+  encoding.writeVarUint(encoder, COLLAB_MESSAGE.saving);
+  encoding.writeVarUint(encoder, state);
   return encoding.toUint8Array(encoder);
 }
 

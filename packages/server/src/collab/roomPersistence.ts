@@ -19,6 +19,17 @@ export class SheetLockedError extends Error {
   }
 }
 
+/**
+ * The room cannot store edits right now (the database is unreachable and the edits waiting in
+ * memory reached their bound): it is read-only until storing works again.
+ */
+export class SavingPausedError extends Error {
+  override name = 'SavingPausedError';
+  constructor(readonly sheetId: string) {
+    super(`sheet ${sheetId} cannot be saved right now: the database is not reachable; try again shortly`);
+  }
+}
+
 /** The workflow status of a sheet, as far as co-editing cares: in check means read-only for all. */
 export type SheetLockState = 'editable' | 'in-check';
 

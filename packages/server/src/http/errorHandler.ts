@@ -1,5 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { ErrorBody } from '@sheaf/engine/api';
+import { SavingPausedError } from '../collab/roomPersistence';
+import { DATABASE_RETRY_AFTER_SECONDS, isDatabaseUnavailable } from '../db/databaseErrors';
 import { ApiError } from './ApiError';
 
 interface HttpLikeError {
@@ -23,12 +25,19 @@ function toApiError(error: unknown): ApiError | null {
   if (e.type === 'encoding.unsupported' || e.type === 'charset.unsupported') {
     return new ApiError(415, 'invalid-field', 'body: send JSON encoded as UTF-8');
   }
+  if (error instanceof SavingPausedError || isDatabaseUnavailable(error)) return databaseUnavailable();
   return null;
+}
+
+/** The answer while the database cannot be reached: nothing was done; try again shortly. */
+export function databaseUnavailable(): ApiError {
+  return new ApiError(503, 'unavailable', `the database is not reachable right now; nothing was changed, try again in ${DATABASE_RETRY_AFTER_SECONDS} seconds`);
 }
 
 /**
  * The one error middleware: every error becomes `{ error: { code, message } }` with its status.
- * Anything unexpected is logged with the request and answered 500 without internals.
+ * A database that cannot be reached is a 503 with Retry-After. Anything unexpected is logged
+ * with the request and answered 500 without internals.
  */
 export const errorHandler: ErrorRequestHandler = (error, req, res, next) => {
   if (res.headersSent) {
@@ -41,6 +50,9 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, next) => {
     ? { error: { code: known.code, message: known.message, ...(known.details ? { details: known.details } : {}) } }
     : { error: { code: 'internal', message: 'the server failed to answer this request; it has been logged' } };
   if (!known) req.log?.error({ err: error }, 'request failed');
+  else if (status === 503) req.log?.warn({ err: error }, 'answered 503: the database is not reachable');
+  else if (known.code === 'integrity') req.log?.error({ err: error }, 'an issued revision failed its integrity check');
+  if (status === 503) res.setHeader('Retry-After', String(DATABASE_RETRY_AFTER_SECONDS));
   res.status(status).json(body);
 };
 

@@ -1,6 +1,6 @@
 import { COLLAB_CLOSE } from '@sheaf/sheet-doc';
 import { describe, expect, it } from 'vitest';
-import { connectionNotice, stateAfterClose, stateAfterStatus } from './connectionState';
+import { connectionNotice, isConnectionUsable, stateAfterClose, stateAfterStatus } from './connectionState';
 
 describe('stateAfterClose', () => {
   it('ends the session on the final codes and names why', () => {
@@ -44,5 +44,15 @@ describe('connectionNotice', () => {
     expect(connectionNotice({ kind: 'refused', code: 4400, reason: 'malformed message' }, false)?.detail).toMatch(
       /4400: malformed message/,
     );
+  });
+
+  it('says saving is paused, and the sheet is read-only meanwhile, keeping what was typed', () => {
+    const notice = connectionNotice({ kind: 'saving-paused' }, false);
+    expect(notice).toMatchObject({ tone: 'warn', title: 'Saving paused' });
+    expect(notice?.detail).toMatch(/read-only for a moment/);
+    expect(notice?.detail).toMatch(/kept here and are sent again when saving resumes/);
+    expect(connectionNotice({ kind: 'saving-paused' }, true)?.detail).toMatch(/Changes by others will show again/);
+    expect(isConnectionUsable({ kind: 'saving-paused' })).toBe(false);
+    expect(isConnectionUsable({ kind: 'live' })).toBe(true);
   });
 });

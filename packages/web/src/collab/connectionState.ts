@@ -7,6 +7,9 @@ import { COLLAB_CLOSE, isFinalCloseCode } from '@sheaf/sheet-doc';
  * - `live`: connected and in step with everyone else.
  * - `reconnecting`: the connection dropped after the document arrived; edits go on locally and
  *   merge when it returns (the provider retries with backoff).
+ * - `saving-paused`: connected, but the server cannot store edits for now (its database is not
+ *   reachable): the sheet is read-only until it says saving resumed; edits made before are kept
+ *   here and sent again then.
  * - `signed-out`, `no-access`, `refused`: the server closed for good (a 44xx code); the provider
  *   has stopped and will not retry.
  */
@@ -14,6 +17,7 @@ export type ConnectionState =
   | { kind: 'connecting' }
   | { kind: 'live' }
   | { kind: 'reconnecting' }
+  | { kind: 'saving-paused' }
   | { kind: 'signed-out' }
   | { kind: 'no-access'; code: number }
   | { kind: 'refused'; code: number; reason: string };
@@ -68,6 +72,14 @@ export function connectionNotice(state: ConnectionState, readOnly: boolean): Con
         detail: readOnly
           ? 'The connection dropped. Changes by others will show again when it returns.'
           : 'The connection dropped. Keep working: your edits are kept here and merge when it returns.',
+      };
+    case 'saving-paused':
+      return {
+        tone: 'warn',
+        title: 'Saving paused',
+        detail: readOnly
+          ? 'The server cannot save changes right now. Changes by others will show again when it can.'
+          : 'The server cannot save changes right now, so the sheet is read-only for a moment. Your earlier edits are kept here and are sent again when saving resumes.',
       };
     case 'signed-out':
       return {

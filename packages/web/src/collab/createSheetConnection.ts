@@ -1,4 +1,5 @@
-import { isFinalCloseCode } from '@sheaf/sheet-doc';
+import { COLLAB_MESSAGE, isFinalCloseCode, SAVING_STATE } from '@sheaf/sheet-doc';
+import * as decoding from 'lib0/decoding';
 import { WebsocketProvider } from 'y-websocket';
 import type { Awareness } from 'y-protocols/awareness';
 import * as Y from 'yjs';
@@ -52,14 +53,24 @@ export function createSheetConnection(sheetId: string, url = collabUrl()): Sheet
     for (const listener of listeners) listener();
   };
   let ended = false;
+  // Told by the server on this connection; a new connection is told again if it still holds.
+  let savingPaused = false;
+  const connectedState = (): ConnectionState => (savingPaused ? { kind: 'saving-paused' } : { kind: 'live' });
 
+  provider.messageHandlers[COLLAB_MESSAGE.saving] = (_encoder, decoder) => {
+    savingPaused = decoding.readVarUint(decoder) === SAVING_STATE.paused;
+    if (ended || !snapshot.synced || !provider.wsconnected) return;
+    set({ synced: true, state: connectedState() });
+  };
   provider.on('status', ({ status }) => {
     if (ended) return;
-    set({ synced: snapshot.synced, state: stateAfterStatus(status, snapshot.synced) });
+    if (status !== 'connected') savingPaused = false;
+    const state = stateAfterStatus(status, snapshot.synced);
+    set({ synced: snapshot.synced, state: state.kind === 'live' ? connectedState() : state });
   });
   provider.on('sync', (isSynced: boolean) => {
     if (ended || !isSynced) return;
-    set({ synced: true, state: provider.wsconnected ? { kind: 'live' } : { kind: 'reconnecting' } });
+    set({ synced: true, state: provider.wsconnected ? connectedState() : { kind: 'reconnecting' } });
   });
   provider.on('closed', (event: { code: number; reason: string }) => {
     const final = stateAfterClose(event.code, event.reason);
