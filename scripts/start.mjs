@@ -39,6 +39,7 @@ try {
 const env = {
   ...process.env,
   DATABASE_URL: db.url,
+  DATABASE_OWNER_URL: db.ownerUrl,
   PORT: String(port),
   NODE_ENV: process.env.NODE_ENV ?? 'development',
   TURBO_TELEMETRY_DISABLED: '1',

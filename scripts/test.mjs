@@ -59,7 +59,7 @@ try {
     rmSync(unitJson, { force: true });
     const unit = run(vitest, ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${unitJson}`], {
       cwd: ROOT,
-      env: { ...env, DATABASE_URL: unitDb.url },
+      env: { ...env, DATABASE_URL: unitDb.url, DATABASE_OWNER_URL: unitDb.ownerUrl },
       allowFail: true,
     });
     results.push({ name: 'unit', status: unit.status, counts: countsFromVitestJson(unitJson) });
@@ -71,7 +71,7 @@ try {
     rmSync(e2eJson, { force: true });
     const e2e = run(vitest, ['run', '--config', 'e2e/vitest.config.ts', '--reporter=default', '--reporter=json', `--outputFile.json=${e2eJson}`], {
       cwd: ROOT,
-      env: { ...env, DATABASE_URL: e2eDb.url },
+      env: { ...env, DATABASE_URL: e2eDb.url, DATABASE_OWNER_URL: e2eDb.ownerUrl },
       allowFail: true,
     });
     results.push({ name: 'browser', status: e2e.status, counts: countsFromVitestJson(e2eJson) });

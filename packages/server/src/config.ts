@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
-/** Where the project-local PostgreSQL cluster listens when DATABASE_URL is not given. */
-export const LOCAL_DATABASE_URL = 'postgres://postgres@127.0.0.1:55432/sheaf';
+/** The project-local cluster's database, as the app's role, when DATABASE_URL is not given. */
+export const LOCAL_DATABASE_URL = 'postgres://sheaf_app@127.0.0.1:55432/sheaf';
 const DEV_SESSION_SECRET = 'sheaf-development-session-secret-not-for-production';
 
 const optionalUrl = z.url({ error: 'must be a URL' }).optional();
@@ -11,6 +11,7 @@ const EnvSchema = z.object({
   PORT: z.coerce.number({ error: 'must be a number' }).int().min(0).max(65535).default(3000),
   HOST: z.string().min(1).default('localhost'),
   DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, { error: 'must be a postgres:// URL' }).optional(),
+  DATABASE_OWNER_URL: z.string().regex(/^postgres(ql)?:\/\//, { error: 'must be a postgres:// URL' }).optional(),
   SESSION_SECRET: z.string().min(1).optional(),
   PUBLIC_URL: optionalUrl,
   TRUST_PROXY: z.coerce.number({ error: 'must be a hop count (0, 1, 2, ...)' }).int().min(0).max(10).optional(),
@@ -103,7 +104,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     nodeEnv: e.NODE_ENV,
     port: e.PORT,
     host: e.HOST,
-    databaseUrl: e.DATABASE_URL ?? LOCAL_DATABASE_URL,
+    databaseUrl: databaseUrlFromEnv(env),
     sessionSecret: e.SESSION_SECRET ?? DEV_SESSION_SECRET,
     publicUrl: e.PUBLIC_URL?.replace(/\/+$/, ''),
     trustProxyHops: e.TRUST_PROXY ?? (production ? 1 : 0),
@@ -115,11 +116,21 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   };
 }
 
-/** DATABASE_URL, or the project-local cluster's default database outside production. */
+/** DATABASE_URL, or the project-local cluster's default database (on PGPORT) outside production. */
 export function databaseUrlFromEnv(env: NodeJS.ProcessEnv = process.env): string {
   if (env.DATABASE_URL) return env.DATABASE_URL;
   if (env.NODE_ENV === 'production') throw new ConfigError('DATABASE_URL: required in production');
-  return LOCAL_DATABASE_URL;
+  return env.PGPORT ? LOCAL_DATABASE_URL.replace(':55432/', `:${env.PGPORT}/`) : LOCAL_DATABASE_URL;
+}
+
+/**
+ * Where migrations run: DATABASE_OWNER_URL (the role that owns the tables), or DATABASE_URL when
+ * one role does both (then the app's role owns the tables, which the server warns about).
+ */
+export function migrationUrlFromEnv(env: NodeJS.ProcessEnv = process.env): string {
+  if (env.DATABASE_OWNER_URL) return env.DATABASE_OWNER_URL;
+  if (!env.DATABASE_URL && env.NODE_ENV !== 'production') return databaseUrlFromEnv(env).replace('//sheaf_app@', '//sheaf_owner@');
+  return databaseUrlFromEnv(env);
 }
 
 /** True where the local stand-ins (fake OAuth provider, fake SMTP, dev inbox) may be mounted. */

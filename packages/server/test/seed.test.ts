@@ -7,6 +7,7 @@ import { promisify } from 'node:util';
 import pg from 'pg';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { setUpRoles } from '../../../scripts/lib/databaseRoles.mjs';
 import { DEMO_ACCOUNTS, DEMO_ORGANIZATION, DEMO_PASSWORD } from '../src/db/demoAccounts';
 import { BUILT_IN_DEMO_SHEETS, DEMO_PROJECTS } from '../src/db/demoSheets';
 import { migrateDatabase } from '../src/db/migrateDatabase';
@@ -21,18 +22,18 @@ const tsx = resolve(packageDir, '../../node_modules/.bin/tsx');
 const ENTRY_POINT_TIMEOUT_MS = 180_000;
 const TABLES = ['users', 'identities', 'organizations', 'memberships', 'invitations', 'password_resets', 'projects', 'sheets', 'audit_events'];
 
-/** A database of its own, so counting every table is not disturbed by other test files. */
-async function freshDatabase(): Promise<{ url: string; drop: () => Promise<void> }> {
+/** A database of its own (with the owner and app roles), so counting every table is not disturbed by other test files. */
+async function freshDatabase(): Promise<{ url: string; ownerUrl: string; drop: () => Promise<void> }> {
   const adminUrl = inject('adminUrl');
   const name = `sheaf_seed_${randomBytes(5).toString('hex')}`;
   const admin = new pg.Client({ connectionString: adminUrl });
   await admin.connect();
   await admin.query(`CREATE DATABASE ${name}`);
   await admin.end();
-  const url = new URL(adminUrl);
-  url.pathname = `/${name}`;
+  const roles = await setUpRoles(adminUrl, name);
   return {
-    url: url.toString(),
+    url: roles.appUrl,
+    ownerUrl: roles.ownerUrl,
     drop: async () => {
       const again = new pg.Client({ connectionString: adminUrl });
       await again.connect();
@@ -55,12 +56,12 @@ async function counts(url: string): Promise<Record<string, number>> {
 }
 
 describe('the migrate and seed entry points', () => {
-  let db: { url: string; drop: () => Promise<void> };
+  let db: { url: string; ownerUrl: string; drop: () => Promise<void> };
   let firstOutput: string;
 
   beforeAll(async () => {
     db = await freshDatabase();
-    const env = { ...process.env, DATABASE_URL: db.url, NODE_ENV: 'development' };
+    const env = { ...process.env, DATABASE_URL: db.url, DATABASE_OWNER_URL: db.ownerUrl, NODE_ENV: 'development' };
     const migrated = await run(tsx, ['src/db/migrate.ts'], { cwd: packageDir, env });
     expect(migrated.stdout).toContain('Initial1796140000000');
     firstOutput = (await run(tsx, ['src/db/seed.ts'], { cwd: packageDir, env })).stdout;
@@ -70,7 +71,7 @@ describe('the migrate and seed entry points', () => {
   });
 
   it('migrates again without change and seeds the demo organization once', async () => {
-    const env = { ...process.env, DATABASE_URL: db.url, NODE_ENV: 'development' };
+    const env = { ...process.env, DATABASE_URL: db.url, DATABASE_OWNER_URL: db.ownerUrl, NODE_ENV: 'development' };
     expect((await run(tsx, ['src/db/migrate.ts'], { cwd: packageDir, env })).stdout).toContain('is up to date');
     const before = await counts(db.url);
     expect(before).toMatchObject({ users: 4, organizations: 1, memberships: 4, projects: DEMO_PROJECTS.length });
@@ -122,12 +123,12 @@ describe('the migrate and seed entry points', () => {
 });
 
 describe('seeding from example files', () => {
-  let db: { url: string; drop: () => Promise<void> };
+  let db: { url: string; ownerUrl: string; drop: () => Promise<void> };
   let dataSource: DataSource;
 
   beforeAll(async () => {
     db = await freshDatabase();
-    await migrateDatabase(db.url);
+    await migrateDatabase(db.ownerUrl);
     dataSource = new DataSource(dataSourceOptions(db.url, 2));
     await dataSource.initialize();
   });

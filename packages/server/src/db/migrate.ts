@@ -1,13 +1,16 @@
-import { databaseUrlFromEnv } from '../config';
+import { migrationUrlFromEnv } from '../config';
 import { migrateDatabase } from './migrateDatabase';
 
-/** `tsx packages/server/src/db/migrate.ts`: migrates DATABASE_URL; exits non-zero on failure. */
+/**
+ * `tsx packages/server/src/db/migrate.ts`: migrates the database as DATABASE_OWNER_URL's role (the
+ * owner of the tables), or DATABASE_URL's when there is one role; exits non-zero on failure.
+ */
 function redact(url: string): string {
   return url.replace(/\/\/([^:@/]+):[^@/]*@/, '//$1:***@');
 }
 
 try {
-  const url = databaseUrlFromEnv();
+  const url = migrationUrlFromEnv();
   const applied = await migrateDatabase(url);
   process.stdout.write(
     applied.length > 0

@@ -17,6 +17,7 @@ import {
 import { organizationFromParams, projectFromParams, sheetFromParams, type AccessGrant } from '../auth/permissions';
 import { collabServerOf } from '../collab/upgradeHandlers';
 import { Revision } from '../entities/Revision';
+import { assertRevisionContentIntact } from '../services/review/revisionIntegrity';
 import { Sheet } from '../entities/Sheet';
 import { notFound } from '../http/ApiError';
 import type { AppDeps } from '../deps';
@@ -118,6 +119,7 @@ export function templateRoutes(): Route[] {
         const sheet = grant.sheet as Sheet;
         const revision = await deps.dataSource.getRepository(Revision).findOneBy({ sheetId: sheet.id, number: params.number });
         if (!revision) throw notFound('revision');
+        assertRevisionContentIntact(revision);
         const template = await createTemplate(deps.dataSource, grant.organizationId, {
           ...body,
           content: checkSheetContent(revision.content, 'revision.content'),

@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import WebSocket from 'ws';
 import * as Y from 'yjs';
 import { COLLAB_CLOSE } from '../../src/collab/closeCodes';
+import { asOwner } from '../helpers/ownerDatabase';
 import { cellText, sheetContentFromDoc } from '../../src/collab/sheetDoc';
 import {
   connectClient,
@@ -52,15 +53,15 @@ function open(sheetId: string, user: CollabUser): TestClient {
 /** Makes PostgreSQL refuse log rows of one sheet (a trigger scoped to it) until the returned function runs. */
 async function refuseLogRowsOf(sheetId: string): Promise<() => Promise<void>> {
   const name = `collab_test_refuse_${randomUUID().replaceAll('-', '')}`;
-  await server.dataSource.query(
+  await asOwner(
     `CREATE FUNCTION ${name}() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN RAISE EXCEPTION 'log refused by the test'; END $$`,
   );
-  await server.dataSource.query(
+  await asOwner(
     `CREATE TRIGGER ${name} BEFORE INSERT ON sheet_updates FOR EACH ROW WHEN (NEW.sheet_id = '${sheetId}'::uuid) EXECUTE FUNCTION ${name}()`,
   );
   return async () => {
-    await server.dataSource.query(`DROP TRIGGER ${name} ON sheet_updates`);
-    await server.dataSource.query(`DROP FUNCTION ${name}()`);
+    await asOwner(`DROP TRIGGER ${name} ON sheet_updates`);
+    await asOwner(`DROP FUNCTION ${name}()`);
   };
 }
 

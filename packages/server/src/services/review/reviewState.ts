@@ -3,6 +3,7 @@ import type { CheckerCandidate, Person, ReturnNotice, ReviewState, Role, Signatu
 import { can, PERMISSIONS } from '@sheaf/engine/api';
 import { notFound } from '../../http/ApiError';
 import { countOpenThreads } from './notes';
+import { assertRevisionsIntact, integrityColumns, type IntegrityFields } from './revisionIntegrity';
 import { currentRevisionOf, type WorkflowRow } from './workflowRow';
 
 interface StateRow extends WorkflowRow {
@@ -70,7 +71,7 @@ export async function reviewState(dataSource: DataSource, sheetId: string, userI
  */
 async function signaturesOf(dataSource: DataSource, row: StateRow): Promise<Signatures> {
   if (row.status === 'approved' && row.revision > 0) {
-    const revisions: Array<{
+    const revisions: Array<IntegrityFields & {
       prepared_by_user_id: string;
       prepared_by_name: string;
       prepared_at: Date;
@@ -81,13 +82,15 @@ async function signaturesOf(dataSource: DataSource, row: StateRow): Promise<Sign
       approved_by_name: string;
       approved_at: Date;
     }> = await dataSource.query(
-      `SELECT prepared_by_user_id, prepared_by_name, prepared_at, checked_by_user_id, checked_by_name, checked_at,
-              approved_by_user_id, approved_by_name, approved_at
-         FROM revisions WHERE sheet_id = $1 AND number = $2`,
+      `SELECT number, prepared_by_user_id, prepared_by_name, prepared_at, checked_by_user_id, checked_by_name, checked_at,
+              approved_by_user_id, approved_by_name, approved_at, ${integrityColumns('r')}
+         FROM revisions r WHERE sheet_id = $1 AND number = $2`,
       [row.id, row.revision],
     );
     const r = revisions[0];
     if (r !== undefined) {
+      // Signatures of an approved revision are shown only while its content matches its hash.
+      await assertRevisionsIntact(dataSource, [r]);
       return {
         prepared: { user: { id: r.prepared_by_user_id, name: r.prepared_by_name }, at: r.prepared_at.toISOString() },
         checked: { user: { id: r.checked_by_user_id, name: r.checked_by_name }, at: r.checked_at.toISOString() },

@@ -4,11 +4,12 @@ import type { FrozenMaterials, RevisionDetail, RevisionDiffResponse, RevisionSum
 import type { CollabServer } from '../../collab/CollabServer';
 import { notFound } from '../../http/ApiError';
 import { materialsLookupFor } from '../materials';
+import { assertRevisionsIntact, integrityColumns, type IntegrityFields } from './revisionIntegrity';
 import { liveSheetContent } from './liveContent';
 import { evaluateOnServer } from './serverResults';
 import { currentRevisionOf, type WorkflowRow } from './workflowRow';
 
-interface RevisionRow {
+interface RevisionRow extends IntegrityFields {
   number: number;
   title: string;
   content_sha256: string;
@@ -30,7 +31,8 @@ interface RevisionRow {
 const SUMMARY_COLUMNS = `number, title, content_sha256, prepared_by_user_id, prepared_by_name, prepared_at,
   checked_by_user_id, checked_by_name, checked_at, approved_by_user_id, approved_by_name, approved_at,
   override_reason, open_notes_at_approval,
-  (SELECT n.approved_at FROM revisions n WHERE n.sheet_id = r.sheet_id AND n.number = r.number + 1) AS superseded_at`;
+  (SELECT n.approved_at FROM revisions n WHERE n.sheet_id = r.sheet_id AND n.number = r.number + 1) AS superseded_at,
+  ${integrityColumns('r')}`;
 
 function toSummary(row: RevisionRow): RevisionSummary {
   return {
@@ -47,16 +49,20 @@ function toSummary(row: RevisionRow): RevisionSummary {
   };
 }
 
-/** A sheet's issued revisions, newest first. */
+/** A sheet's issued revisions, newest first; each checked against its recorded hash. */
 export async function listRevisions(dataSource: DataSource, sheetId: string): Promise<RevisionSummary[]> {
   const rows: RevisionRow[] = await dataSource.query(
     `SELECT ${SUMMARY_COLUMNS} FROM revisions r WHERE r.sheet_id = $1 ORDER BY r.number DESC`,
     [sheetId],
   );
+  await assertRevisionsIntact(dataSource, rows);
   return rows.map(toSummary);
 }
 
-/** One issued revision with its content and results; 404 when the sheet has no such revision. */
+/**
+ * One issued revision with its content and results, checked against its recorded hash; 404 when
+ * the sheet has no such revision.
+ */
 export async function revisionDetail(dataSource: DataSource, sheetId: string, number: number): Promise<RevisionDetail> {
   const rows: Array<RevisionRow & { content: SheetContentV1; results: MachineOutput; frozen_materials: FrozenMaterials }> = await dataSource.query(
     `SELECT ${SUMMARY_COLUMNS}, content, results, frozen_materials FROM revisions r WHERE r.sheet_id = $1 AND r.number = $2`,
@@ -64,6 +70,7 @@ export async function revisionDetail(dataSource: DataSource, sheetId: string, nu
   );
   const row = rows[0];
   if (row === undefined) throw notFound(`revision ${number}`);
+  await assertRevisionsIntact(dataSource, [row]);
   return { ...toSummary(row), content: row.content, results: row.results as RevisionDetail['results'], materials: row.frozen_materials };
 }
 
