@@ -13,7 +13,8 @@
  *
  * Runs against DATABASE_URL when set, otherwise in a throwaway database on the project cluster.
  * BENCH_SECONDS (default 8) sets the length of each HTTP run, BENCH_WS_SECONDS (default 15) of
- * each typing run; BENCH_ONLY=http or ws runs one half.
+ * each typing run; BENCH_ONLY=http or ws runs one half, BENCH_ROUTES a comma-separated choice of
+ * routes; BENCH_CPU_PROF=<folder> has the server write a CPU profile there.
  */
 import 'reflect-metadata';
 import { randomBytes } from 'node:crypto';
@@ -39,6 +40,8 @@ const ENGINEERS = 10;
 const HTTP_SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const WS_SECONDS = Number(process.env.BENCH_WS_SECONDS ?? 15);
 const ONLY = process.env.BENCH_ONLY ?? 'all';
+/** BENCH_ROUTES="sheet list,review": only these HTTP routes. */
+const ROUTES = process.env.BENCH_ROUTES?.split(',').map((name) => name.trim());
 /** A production server behind one proxy: requests say they came over https, so secure cookies work. */
 const FORWARDED = { 'x-forwarded-proto': 'https' };
 
@@ -116,18 +119,20 @@ async function httpHalf(server: ServerProcess, seeded: Seeded): Promise<void> {
     ['20 conn, 500/s', { connections: 20, rate: 500, seconds: HTTP_SECONDS }],
     ['100 conn, 500/s', { connections: 100, rate: 500, seconds: HTTP_SECONDS }],
   ];
-  console.log(`\nHTTP (${HTTP_SECONDS} s per run; latency in ms)`);
+  console.log(`\nHTTP (${HTTP_SECONDS} s per run; latency in ms; server CPU in % of one core and ms per answer)`);
   console.log('  route        load              req/s     p50     p95     p99  failures  server CPU');
-  for (const [name, path] of routes) {
+  for (const [name, path] of routes.filter(([name]) => !ROUTES || ROUTES.includes(name))) {
     const sizeBytes = (await (await fetch(`${server.url}${path}`, { headers })).text()).length;
     await loadRoute(`${server.url}${path}`, headers, { connections: 10, seconds: 1 }); // warm-up
     for (const [label, run] of runs) {
       const cpuBefore = server.usage().cpuSeconds;
       const started = Date.now();
       const figures = await loadRoute(`${server.url}${path}`, headers, run);
-      const cpu = ((server.usage().cpuSeconds - cpuBefore) / ((Date.now() - started) / 1000)) * 100;
+      const cpuSeconds = server.usage().cpuSeconds - cpuBefore;
+      const cpu = (cpuSeconds / ((Date.now() - started) / 1000)) * 100;
+      const perAnswer = (cpuSeconds * 1000) / Math.max(1, figures.responses);
       console.log(
-        `  ${name.padEnd(12)} ${label.padEnd(16)} ${figures.requestsPerSecond.toFixed(0).padStart(6)}  ${ms(figures.p50)}  ${ms(figures.p95)}  ${ms(figures.p99)}  ${String(figures.failures).padStart(8)}  ${cpu.toFixed(0).padStart(5)} %`,
+        `  ${name.padEnd(12)} ${label.padEnd(16)} ${figures.requestsPerSecond.toFixed(0).padStart(6)}  ${ms(figures.p50)}  ${ms(figures.p95)}  ${ms(figures.p99)}  ${String(figures.failures).padStart(8)}  ${cpu.toFixed(0).padStart(5)} %  ${perAnswer.toFixed(2).padStart(5)} ms`,
       );
     }
     console.log(`  ${''.padEnd(12)} (answer ${(sizeBytes / 1024).toFixed(1)} KiB)`);

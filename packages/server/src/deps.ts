@@ -2,9 +2,9 @@ import { resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Request } from 'express';
 import session from 'express-session';
-import connectPgSimple from 'connect-pg-simple';
 import pg from 'pg';
 import { DataSource } from 'typeorm';
+import { createSessionStore } from './auth/sessionStore';
 import { fakesAllowed, type Config } from './config';
 import { CONNECT_TIMEOUT_MS, dataSourceOptions } from './db/options';
 import { SmtpInbox } from './fakes/smtpInbox';
@@ -122,14 +122,7 @@ export async function openResources(config: Config, overrides: ResourceOverrides
     connectionTimeoutMillis: CONNECT_TIMEOUT_MS,
   });
   sessionPool.on('error', onPoolError('sessions'));
-  const PgStore = connectPgSimple(session);
-  const sessionStore = new PgStore({
-    pool: sessionPool,
-    tableName: 'sessions',
-    createTableIfMissing: false,
-    pruneSessionInterval: config.nodeEnv === 'test' ? false : 15 * 60,
-    errorLog: (...args: unknown[]) => logger.error({ args }, 'session store error'),
-  });
+  const sessionStore = createSessionStore(sessionPool, logger, { prune: config.nodeEnv !== 'test' });
 
   let devInbox: SmtpInbox | null = null;
   if (!config.smtpUrl && fakesAllowed(config)) {

@@ -37,7 +37,9 @@ function usageOf(pid: number): ServerUsage {
 }
 
 export async function startServerProcess(env: Record<string, string>, port: number): Promise<ServerProcess> {
-  const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'src/index.ts'], {
+  // BENCH_CPU_PROF=<folder>: the server writes a V8 CPU profile there when it stops.
+  const profile = process.env.BENCH_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_CPU_PROF}`] : [];
+  const child: ChildProcess = spawn(process.execPath, [...profile, '--import', 'tsx', 'src/index.ts'], {
     cwd: SERVER_DIR,
     env: { ...process.env, ...env, PORT: String(port), HOST: '127.0.0.1' },
     stdio: ['ignore', 'ignore', 'inherit'],

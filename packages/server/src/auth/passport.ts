@@ -100,11 +100,11 @@ export function createAuthenticator(deps: AppDeps): Authenticator {
   }
 
   authenticator.serializeUser((user, done) => done(null, user.id));
+  // Every signed-in request: one small query for the three public fields (a deleted user is nobody).
   authenticator.deserializeUser((id: string, done) => {
     dataSource
-      .getRepository(User)
-      .findOneBy({ id })
-      .then((user) => done(null, user ? publicUser(user) : false))
+      .query(`SELECT id, email, name FROM users WHERE id = $1`, [id])
+      .then((rows: Array<Pick<User, 'id' | 'email' | 'name'>>) => done(null, rows[0] ? publicUser(rows[0]) : false))
       .catch(done);
   });
   return authenticator;

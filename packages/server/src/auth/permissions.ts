@@ -2,9 +2,8 @@ import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import type { DataSource } from 'typeorm';
 import { z } from 'zod';
 import { ACTIONS, can, canEditSheet, PERMISSIONS, type Action, type Role } from '@sheaf/engine/api';
-import { Membership } from '../entities/Membership';
-import { Project } from '../entities/Project';
-import { Sheet } from '../entities/Sheet';
+import type { Project } from '../entities/Project';
+import type { Sheet } from '../entities/Sheet';
 import { ApiError, notFound, notSignedIn } from '../http/ApiError';
 import { depsOf } from '../deps';
 
@@ -15,11 +14,22 @@ import { depsOf } from '../deps';
  */
 export { ACTIONS, PERMISSIONS, can, canEditSheet, type Action, type Role };
 
+/** A sheet as access decisions know it: which one, where it belongs, its title block (not its content). */
+export type SheetRef = Pick<
+  Sheet,
+  'id' | 'organizationId' | 'projectId' | 'title' | 'status' | 'revision'
+>;
+
 /** The organization a request acts in, and the resource it found on the way. */
 export interface AccessTarget {
   organizationId: string;
   project?: Project;
-  sheet?: Sheet;
+  sheet?: SheetRef;
+  /**
+   * The caller's role there, when the lookup read it in the same query (null: not a member);
+   * left undefined, the role is looked up separately.
+   */
+  role?: Role | null;
 }
 
 /** A granted request: the target plus the caller's role there. */
@@ -32,11 +42,15 @@ export interface AccessGrant extends AccessTarget {
  * none; `what` names the resource in the 404 answer.
  */
 export interface AccessResolver {
-  (req: Request, dataSource: DataSource): Promise<AccessTarget | null>;
+  /** `userId`: the signed-in caller, whose role the lookup may read on the way. */
+  (req: Request, dataSource: DataSource, userId: string): Promise<AccessTarget | null>;
   what: string;
 }
 
-function resolver(what: string, resolve: (req: Request, dataSource: DataSource) => Promise<AccessTarget | null>): AccessResolver {
+function resolver(
+  what: string,
+  resolve: (req: Request, dataSource: DataSource, userId: string) => Promise<AccessTarget | null>,
+): AccessResolver {
   return Object.assign(resolve, { what });
 }
 
@@ -56,32 +70,96 @@ export const organizationFromParams = resolver('organization', async (req) => {
   return organizationId ? { organizationId } : null;
 });
 
-/** Resolves `:projectId` to its project and organization. */
-export const projectFromParams = resolver('project', async (req, dataSource) => {
+/** Resolves `:projectId` to its project and organization, with the caller's role there (one query). */
+export const projectFromParams = resolver('project', async (req, dataSource, userId) => {
   const id = idParam(req, 'projectId');
   if (!id) return null;
-  const project = await dataSource.getRepository(Project).findOneBy({ id });
-  return project ? { organizationId: project.organizationId, project } : null;
+  const rows: Array<{
+    id: string;
+    organization_id: string;
+    name: string;
+    code: string;
+    next_calc_seq: number;
+    created_at: Date;
+    role: Role | null;
+  }> = await dataSource.query(
+    `SELECT p.id, p.organization_id, p.name, p.code, p.next_calc_seq, p.created_at, m.role
+         FROM projects p LEFT JOIN memberships m ON m.organization_id = p.organization_id AND m.user_id = $2
+        WHERE p.id = $1`,
+    [id, userId],
+  );
+  const row = rows[0];
+  if (row === undefined) return null;
+  const project: Project = {
+    id: row.id,
+    organizationId: row.organization_id,
+    name: row.name,
+    code: row.code,
+    nextCalcSeq: row.next_calc_seq,
+    createdAt: row.created_at,
+  };
+  return { organizationId: row.organization_id, project, role: row.role };
 });
 
-/** Resolves `:sheetId` to its sheet and organization. */
-export const sheetFromParams = resolver('sheet', async (req, dataSource) => {
+/** Resolves `:sheetId` to its sheet and organization, with the caller's role there (one query). */
+export const sheetFromParams = resolver('sheet', async (req, dataSource, userId) => {
   const id = idParam(req, 'sheetId');
   if (!id) return null;
-  return sheetTarget(dataSource, id);
+  return sheetTarget(dataSource, id, userId);
 });
 
-/** The target of a sheet by id; also used by the websocket layer. */
-export async function sheetTarget(dataSource: DataSource, sheetId: string): Promise<AccessTarget | null> {
+/**
+ * The target of a sheet by id (with `userId`'s role in its organization when given); also used
+ * by the websocket layer. Reads no content: access decisions need only where the sheet belongs.
+ */
+export async function sheetTarget(
+  dataSource: DataSource,
+  sheetId: string,
+  userId?: string,
+): Promise<AccessTarget | null> {
   if (!uuid.safeParse(sheetId).success) return null;
-  const sheet = await dataSource.getRepository(Sheet).findOneBy({ id: sheetId });
-  return sheet ? { organizationId: sheet.organizationId, sheet } : null;
+  const rows: Array<{
+    id: string;
+    organization_id: string;
+    project_id: string;
+    title: string;
+    status: Sheet['status'];
+    revision: number;
+    role: Role | null;
+  }> = await dataSource.query(
+    `SELECT s.id, s.organization_id, s.project_id, s.title, s.status, s.revision, m.role
+       FROM sheets s LEFT JOIN memberships m ON m.organization_id = s.organization_id AND m.user_id = $2
+      WHERE s.id = $1`,
+    [sheetId, userId ?? null],
+  );
+  const row = rows[0];
+  if (row === undefined) return null;
+  const sheet: SheetRef = {
+    id: row.id,
+    organizationId: row.organization_id,
+    projectId: row.project_id,
+    title: row.title,
+    status: row.status,
+    revision: row.revision,
+  };
+  return {
+    organizationId: row.organization_id,
+    sheet,
+    ...(userId === undefined ? {} : { role: row.role }),
+  };
 }
 
 /** The user's role in the organization, or null when not a member. */
-export async function roleIn(dataSource: DataSource, userId: string, organizationId: string): Promise<Role | null> {
-  const membership = await dataSource.getRepository(Membership).findOneBy({ organizationId, userId });
-  return membership?.role ?? null;
+export async function roleIn(
+  dataSource: DataSource,
+  userId: string,
+  organizationId: string,
+): Promise<Role | null> {
+  const rows: Array<{ role: Role }> = await dataSource.query(
+    `SELECT role FROM memberships WHERE organization_id = $1 AND user_id = $2`,
+    [organizationId, userId],
+  );
+  return rows[0]?.role ?? null;
 }
 
 /**
@@ -98,12 +176,19 @@ export async function decideAccess(
 ): Promise<AccessDecision> {
   if (!userId) return { ok: false, error: notSignedIn() };
   if (!target) return { ok: false, error: notFound(what) };
-  const role = await roleIn(dataSource, userId, target.organizationId);
+  const role =
+    target.role !== undefined
+      ? target.role
+      : await roleIn(dataSource, userId, target.organizationId);
   if (!role) return { ok: false, error: notFound(what) };
   if (!can(role, action)) {
-    return { ok: false, error: new ApiError(403, 'forbidden', `your role (${role}) does not allow ${action}`) };
+    return {
+      ok: false,
+      error: new ApiError(403, 'forbidden', `your role (${role}) does not allow ${action}`),
+    };
   }
-  return { ok: true, grant: { ...target, role } };
+  const { role: _found, ...found } = target;
+  return { ok: true, grant: { ...found, role } };
 }
 
 /**
@@ -115,7 +200,7 @@ export function requirePermission(action: Action, resolve: AccessResolver): Requ
     const { dataSource } = depsOf(req);
     const userId = req.user?.id;
     // Nobody signed in: answer 401 before looking anything up, so nothing leaks.
-    const target = userId ? await resolve(req, dataSource) : null;
+    const target = userId ? await resolve(req, dataSource, userId) : null;
     const decision = await decideAccess(dataSource, userId, action, target, resolve.what);
     if (!decision.ok) {
       next(decision.error);

@@ -1,5 +1,6 @@
 import type { Server } from 'node:http';
 import type { Request } from 'express';
+import type { DataSource } from 'typeorm';
 import { z } from 'zod';
 import {
   CreateTemplateRequest,
@@ -40,10 +41,13 @@ function userOf(user: Express.User | undefined): string {
  * The sheet's content as the people editing it see it now (the co-editing room's document when
  * the sheet is open), else as stored; checked by the engine's format reader.
  */
-async function currentContent(req: Request, sheet: Sheet): Promise<SheetContentV1> {
+async function currentContent(req: Request, dataSource: DataSource, sheetId: string): Promise<SheetContentV1> {
   const server = (req.socket as { server?: Server }).server;
-  const live = server ? await collabServerOf(server)?.liveContent(sheet.id) : null;
-  return checkSheetContent(live ?? sheet.content, 'sheet.content');
+  const live = server ? await collabServerOf(server)?.liveContent(sheetId) : null;
+  if (live) return checkSheetContent(live, 'sheet.content');
+  const rows: Array<{ content: unknown }> = await dataSource.query(`SELECT content FROM sheets WHERE id = $1`, [sheetId]);
+  if (rows[0] === undefined) throw notFound('sheet');
+  return checkSheetContent(rows[0].content, 'sheet.content');
 }
 
 async function sheetOfOrganization(deps: AppDeps, organizationId: string, sheetId: string): Promise<Sheet> {
@@ -94,10 +98,10 @@ export function templateRoutes(): Route[] {
       response: { status: 201, description: 'The new template, version 1', schema: TemplateResponse },
       handler: async ({ req, deps, access, body, user }) => {
         const grant = granted(access);
-        const sheet = grant.sheet as Sheet;
+        const sheet = grant.sheet!;
         const template = await createTemplate(deps.dataSource, grant.organizationId, {
           ...body,
-          content: await currentContent(req, sheet),
+          content: await currentContent(req, deps.dataSource, sheet.id),
           sourceSheetId: sheet.id,
           userId: userOf(user),
         });
@@ -116,7 +120,7 @@ export function templateRoutes(): Route[] {
       response: { status: 201, description: 'The new template, version 1', schema: TemplateResponse },
       handler: async ({ deps, access, params, body, user }) => {
         const grant = granted(access);
-        const sheet = grant.sheet as Sheet;
+        const sheet = grant.sheet!;
         const revision = await deps.dataSource.getRepository(Revision).findOneBy({ sheetId: sheet.id, number: params.number });
         if (!revision) throw notFound('revision');
         assertRevisionContentIntact(revision);
@@ -148,7 +152,7 @@ export function templateRoutes(): Route[] {
           description: body.description,
           category: body.category,
           parameters: body.parameters,
-          content: sheet ? await currentContent(req, sheet) : undefined,
+          content: sheet ? await currentContent(req, deps.dataSource, sheet.id) : undefined,
           sourceSheetId: sheet?.id ?? null,
           userId: userOf(user),
         });

@@ -135,7 +135,7 @@ export async function createSheet(
  */
 export async function updateSheet(
   dataSource: DataSource,
-  sheet: Sheet,
+  sheet: Pick<Sheet, 'id' | 'title' | 'projectId' | 'organizationId'>,
   changes: { title?: string; projectId?: string },
   actorUserId: string | null = null,
 ): Promise<SheetDetail> {

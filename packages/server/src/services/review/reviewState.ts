@@ -34,12 +34,17 @@ export async function reviewState(dataSource: DataSource, sheetId: string, userI
   const row = rows[0];
   if (row === undefined) throw notFound('sheet');
   const currentRevision = currentRevisionOf(row);
-  const openNotes = await countOpenThreads(dataSource.manager, sheetId);
-  const candidates: CheckerCandidate[] = await dataSource.query(
-    `SELECT u.id, u.name, m.role FROM memberships m JOIN users u ON u.id = m.user_id
-      WHERE m.organization_id = $1 AND m.role = ANY($2::text[]) ORDER BY lower(u.name), u.id`,
-    [row.organization_id, CHECK_ROLES],
-  );
+  // Independent reads, side by side.
+  const [openNotes, candidates, signatures, returned] = await Promise.all([
+    countOpenThreads(dataSource.manager, sheetId),
+    dataSource.query(
+      `SELECT u.id, u.name, m.role FROM memberships m JOIN users u ON u.id = m.user_id
+        WHERE m.organization_id = $1 AND m.role = ANY($2::text[]) ORDER BY lower(u.name), u.id`,
+      [row.organization_id, CHECK_ROLES],
+    ) as Promise<CheckerCandidate[]>,
+    signaturesOf(dataSource, row),
+    row.status === 'draft' ? lastReturn(dataSource, sheetId, currentRevision) : Promise.resolve(null),
+  ]);
   const inCheck = row.status === 'in-check';
   const isChecker = inCheck && row.checker_user_id === userId && row.prepared_by_user_id !== userId;
   return {
@@ -51,8 +56,8 @@ export async function reviewState(dataSource: DataSource, sheetId: string, userI
     checker: person(row.checker_user_id, row.checker_name),
     submittedAt: row.submitted_at?.toISOString() ?? null,
     openNotes,
-    signatures: await signaturesOf(dataSource, row),
-    lastReturn: row.status === 'draft' ? await lastReturn(dataSource, sheetId, currentRevision) : null,
+    signatures,
+    lastReturn: returned,
     checkerCandidates: candidates,
     can: {
       submit: can(role, 'sheet.submit') && row.status === 'draft' && candidates.some((c) => c.id !== userId),
