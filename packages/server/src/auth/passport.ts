@@ -3,6 +3,7 @@ import passport from 'passport';
 import { Strategy as GitHubStrategy, type Profile, type StrategyOptionsWithRequest } from 'passport-github2';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { AppDeps } from '../deps';
+import type { SheafSessionStore } from './sessionStore';
 import { User } from '../entities/User';
 import { FAKE_OAUTH_PATHS } from '../fakes/oauthProvider';
 import { findUserByEmail, publicUser } from '../services/accounts';
@@ -100,8 +101,14 @@ export function createAuthenticator(deps: AppDeps): Authenticator {
   }
 
   authenticator.serializeUser((user, done) => done(null, user.id));
-  // Every signed-in request: one small query for the three public fields (a deleted user is nobody).
-  authenticator.deserializeUser((id: string, done) => {
+  // Every signed-in request: the user read with the session (sessionStore.ts), else one small
+  // query for the three public fields. A deleted user is nobody.
+  authenticator.deserializeUser((req: Request, id: string, done: (error: unknown, user?: Express.User | false) => void) => {
+    const read = (deps.sessionStore as Partial<SheafSessionStore>).takeUserOf?.(req.sessionID, id);
+    if (read !== undefined) {
+      done(null, read === null ? false : publicUser(read));
+      return;
+    }
     dataSource
       .query(`SELECT id, email, name FROM users WHERE id = $1`, [id])
       .then((rows: Array<Pick<User, 'id' | 'email' | 'name'>>) => done(null, rows[0] ? publicUser(rows[0]) : false))
