@@ -6,6 +6,7 @@ import { createAppQueryClient } from './api/queryClient';
 import { signInPathFor } from './lib/safeNextPath';
 import { createRoutes } from './router';
 import './styles/app.css';
+import './styles/print.css';
 
 const queryClient = createAppQueryClient({
   // A request made on the user's behalf answered 401: the session ended (expired, signed out

@@ -12,9 +12,9 @@ export function AppShell() {
   const me = useMe();
   if (!me.data) return <Loading what="your account" />;
   return (
-    <div className="flex flex-1 flex-col">
+    <div className="flex flex-1 flex-col print:block">
       <TopBar user={me.data.user} />
-      <div className="flex flex-1 flex-col md:flex-row">
+      <div className="flex flex-1 flex-col md:flex-row print:block">
         <SideNav />
         <main
           id="main"

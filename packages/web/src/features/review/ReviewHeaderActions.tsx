@@ -66,12 +66,20 @@ export function ReviewHeaderActions({ sheet }: { sheet: SheetSummary; role?: Rol
               Reassign checker…
             </button>
           ) : null}
+          {state.issuedRevision > 0 ? (
+            <Link className="btn" to={`/sheets/${sheet.id}/revisions/${state.issuedRevision}`}>
+              Issued revision {state.issuedRevision}
+            </Link>
+          ) : null}
           <Link className="btn" to={`/sheets/${sheet.id}/revisions`}>
             Revisions
           </Link>
           <Link className="btn" to={`/sheets/${sheet.id}/history`}>
             History
           </Link>
+          <button type="button" className="btn" onClick={() => window.print()} title="Prints the live sheet, marked as not issued">
+            Print draft…
+          </button>
         </div>
       </div>
       {open === 'submit' && state.can.submit ? <SubmitForCheckPanel review={state} userId={userId} onDone={close} /> : null}

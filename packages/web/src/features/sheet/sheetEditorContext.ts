@@ -1,3 +1,4 @@
+import type { FrozenMaterials } from '@sheaf/engine/api';
 import { createContext } from 'react';
 import type { Awareness } from 'y-protocols/awareness';
 import type * as Y from 'yjs';
@@ -16,6 +17,18 @@ export interface SheetEditorContextValue {
   completion: CompletionSheet;
   /** The organization whose materials library the sheet's cells pick from; null while unknown. */
   organizationId?: string | null;
+  /**
+   * Set when the cells are shown as an issued document rather than edited: every field reads as
+   * text (no editors, no selects), and a cell that names a material shows the values frozen with
+   * the revision.
+   */
+  asDocument?: DocumentPresentation;
+}
+
+/** How an issued revision's cells are shown. */
+export interface DocumentPresentation {
+  /** The library materials the revision was issued with, by id, as frozen at approval. */
+  materials: FrozenMaterials;
 }
 
 export const SheetEditorContext = createContext<SheetEditorContextValue | null>(null);

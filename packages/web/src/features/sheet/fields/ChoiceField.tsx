@@ -1,4 +1,5 @@
-import { useId, type ReactNode } from 'react';
+import { useContext, useId, type ReactNode } from 'react';
+import { SheetEditorContext } from '../sheetEditorContext';
 
 export interface Choice {
   value: string;
@@ -8,7 +9,8 @@ export interface Choice {
 /**
  * A field with a fixed set of values (theory, layout, unit, the state a cell refers to) as a
  * select. A value that is not one of the choices (typed into the file, or a cell since renamed)
- * is kept and shown as such, never silently replaced.
+ * is kept and shown as such, never silently replaced. In an issued document the choice reads as
+ * text.
  */
 export function ChoiceField({
   label,
@@ -30,7 +32,17 @@ export function ChoiceField({
   unknownLabel?: (value: string) => string;
 }) {
   const id = useId();
-  const known = choices.some((choice) => choice.value === value);
+  const asDocument = useContext(SheetEditorContext)?.asDocument !== undefined;
+  const chosen = choices.find((choice) => choice.value === value);
+  if (asDocument) {
+    return (
+      <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-baseline gap-x-2" data-choice-text="">
+        <span className="text-right text-[0.8125rem] text-ink-muted">{label}</span>
+        <span className={value === '' ? 'text-ink-faint' : ''}>{chosen ? chosen.label : value === '' ? '—' : unknownLabel(value)}</span>
+      </div>
+    );
+  }
+  const known = chosen !== undefined;
   return (
     <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-center gap-x-2">
       <label htmlFor={id} className="text-right text-[0.8125rem] text-ink-muted">

@@ -29,7 +29,7 @@ export interface ExpressionFieldProps {
  */
 export function ExpressionField(props: ExpressionFieldProps) {
   const { cellId, field, symbol, sub, meaning, placeholder, errorField, errorId, optional = false } = props;
-  const { doc, store, awareness, readOnly, completion } = useSheetEditor();
+  const { doc, store, awareness, readOnly, completion, asDocument } = useSheetEditor();
   const names = useSheetNames(store);
   const nameSet = useMemo(() => new Set(names), [names]);
   const text = useCellText(doc, cellId, field);
@@ -48,6 +48,18 @@ export function ExpressionField(props: ExpressionFieldProps) {
     ? { kind: 'shared', text, awareness }
     : { kind: 'plain', value: '', onChange: (value) => value !== '' && setTextField(doc, cellId, field, value) };
   const invalid = errorField === field;
+
+  if (asDocument && (!text || text.length === 0)) {
+    // An optional field left out of an issued sheet: say what that means (e.g. "1 when empty").
+    return (
+      <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-baseline gap-x-2" data-field={field}>
+        <span className="text-right text-ink-muted" title={meaning}>
+          <FieldSymbol symbol={symbol} sub={sub} />
+        </span>
+        <span className="text-[0.875rem] text-ink-faint">{placeholder ?? 'not given'}</span>
+      </div>
+    );
+  }
 
   return (
     <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-x-2" data-field={field}>

@@ -1,6 +1,7 @@
 import { isTheoryId, THEORIES, THEORY_IDS, type StrengthKey } from '@sheaf/engine';
 import type { SheetFileCell } from '@sheaf/sheet-doc';
 import { MaterialPicker } from '../../materials/MaterialPicker';
+import { MaterialValues } from '../../materials/MaterialValues';
 import { deleteField, setPlainField, setTextField } from '../doc/fieldWrites';
 import { usePlainFieldWriter } from '../hooks/usePlainFieldWriter';
 import { useSheetEditor } from '../hooks/useSheetEditor';
@@ -34,7 +35,7 @@ export function StrengthFields({
   errorField: string | null;
   errorId?: string;
 }) {
-  const { doc, readOnly, organizationId } = useSheetEditor();
+  const { doc, readOnly, organizationId, asDocument } = useSheetEditor();
   const writer = usePlainFieldWriter(doc, cell.id);
   const theory = typeof cell.theory === 'string' ? cell.theory : '';
   const needs = isTheoryId(theory) ? THEORIES[theory].needs : [];
@@ -63,7 +64,19 @@ export function StrengthFields({
         describedBy={errorId}
         onChange={(value) => setTextField(doc, cell.id, 'theory', value)}
       />
-      {organizationId ? (
+      {asDocument && material !== null ? (
+        <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-x-2" data-field="material">
+          <span className="text-right text-[0.8125rem] text-ink-muted">material</span>
+          {asDocument.materials[material] ? (
+            <MaterialValues material={asDocument.materials[material]} keys={needs} caption="Frozen at approval" />
+          ) : (
+            <span>
+              <span className="font-mono">{material}</span>{' '}
+              <span className="text-ink-muted">(not in the materials frozen with this revision)</span>
+            </span>
+          )}
+        </div>
+      ) : organizationId ? (
         <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-x-2">
           <span className="pt-[5px] text-right text-[0.8125rem] text-ink-muted">material</span>
           <MaterialPicker
@@ -77,7 +90,7 @@ export function StrengthFields({
           />
         </div>
       ) : null}
-      {material !== null && !organizationId ? (
+      {asDocument && material !== null ? null : material !== null && !organizationId ? (
         <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-x-2">
           <span className="pt-[5px] text-right text-[0.8125rem] text-ink-muted">material</span>
           <TextValueField
@@ -127,7 +140,7 @@ export function StrengthFields({
         optional
       />
       {needs.length > 0 && material === null && !readOnly ? (
-        <p className="pl-[5rem] text-[0.75rem] text-ink-faint">
+        <p className="no-print pl-[5rem] text-[0.75rem] text-ink-faint">
           Take strengths from a published source for the material and cite it in a note (standard or
           handbook, edition, table; minimum specification values marked as such).
         </p>

@@ -5,6 +5,7 @@ import { FieldSymbol } from '../fields/FieldSymbol';
 import { StrengthFields } from '../fields/StrengthFields';
 import { useSheetEditor } from '../hooks/useSheetEditor';
 import type { KindViewProps } from './kindView';
+import { PointRowsTable } from './PointRowsTable';
 import { parseRows, rowsText } from './pointRows';
 
 const UNITS = ['MPa', 'kPa', 'GPa', 'Pa', 'ksi', 'psi'].map((u) => ({ value: u, label: u }));
@@ -16,10 +17,11 @@ const COMPONENTS = [
 
 /**
  * A set of stress points checked at once: the rows (typed or pasted, one point per line), which
- * column holds which component, their unit, and the theory with its strengths.
+ * column holds which component, their unit, and the theory with its strengths. On paper and in an
+ * issued document the rows are listed as a short table (the first rows and the worst one).
  */
-export function PointsetInputs({ cell, cellName, errorField, errorId }: KindViewProps) {
-  const { doc, readOnly } = useSheetEditor();
+export function PointsetInputs({ cell, cellName, result, errorField, errorId }: KindViewProps) {
+  const { doc, readOnly, asDocument } = useSheetEditor();
   const rowsId = useId();
   const rowsErrorId = useId();
   const source = (typeof cell.source === 'object' && cell.source !== null ? cell.source : {}) as {
@@ -33,15 +35,20 @@ export function PointsetInputs({ cell, cellName, errorField, errorId }: KindView
   const parsed = draft === null ? null : parseRows(draft);
   const width = Math.max(3, ...(rows ?? []).map((row) => row.length));
   const columnChoices = Array.from({ length: width }, (_, i) => ({ value: String(i), label: `column ${i + 1}` }));
+  const unit = typeof cell.unit === 'string' ? cell.unit : 'MPa';
+  const worst = result?.ok && typeof result.values.worstRow === 'number' ? result.values.worstRow : null;
+  const table = rows ? <PointRowsTable rows={rows} columns={columns} unit={unit} worstRow={worst} /> : null;
 
   return (
     <>
-      {rows ? (
+      {rows && asDocument ? (
+        table
+      ) : rows ? (
         <div className="grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-x-2">
-          <label htmlFor={rowsId} className="pt-1 text-right text-[0.8125rem] text-ink-muted">
+          <label htmlFor={rowsId} className="pt-1 text-right text-[0.8125rem] text-ink-muted print:hidden">
             rows
           </label>
-          <div>
+          <div className="print:hidden">
             <textarea
               id={rowsId}
               className="input h-24 font-mono text-[0.875rem]"
@@ -69,6 +76,8 @@ export function PointsetInputs({ cell, cellName, errorField, errorId }: KindView
               </p>
             ) : null}
           </div>
+          {/* On paper the text box would be cut off: the short table stands for it. */}
+          <div className="col-span-2 hidden print:block">{table}</div>
         </div>
       ) : (
         <p className="pl-[5rem] text-[0.8125rem] text-ink-muted">

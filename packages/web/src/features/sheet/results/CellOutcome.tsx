@@ -4,7 +4,7 @@ import { VerdictLabel } from '../../../components/VerdictShape';
 import { CellErrorNotice } from './CellErrorNotice';
 import { ResultValues } from './ResultValues';
 import { resultRows } from './resultRows';
-import { TexView } from './TexView';
+import { EquationView } from './EquationView';
 import { verdictOf } from './verdict';
 
 /**
@@ -38,14 +38,7 @@ export function CellOutcome({
 
   return (
     <div className="space-y-2" data-result-state="ok">
-      {equation ? (
-        <TexView
-          latex={equation}
-          display
-          label={`Equation of ${cellName || 'the cell'}`}
-          className="equation overflow-x-auto overflow-y-hidden py-0.5 text-[0.9rem] print:overflow-visible"
-        />
-      ) : null}
+      {equation ? <EquationView latex={equation} label={`Equation of ${cellName || 'the cell'}`} /> : null}
       {rows && showValues ? <ResultValues rows={rows.primary} label={`Results of ${cellName || 'the cell'}`} /> : null}
       {rows && !showValues ? (
         <p className="sr-only" data-value="value">
