@@ -96,6 +96,20 @@ describe('SheetPage', () => {
     expect(document.querySelector('[data-live]')?.getAttribute('data-live')).toBe('false');
   }, 60_000);
 
+  it('prints as a draft: the not-issued mark and the title block head every page, the notes rail stays off paper', async () => {
+    serve('engineer');
+    renderApp(`/sheets/${lug.id}`);
+    const block = await screen.findByRole('region', { name: 'Title block' }, { timeout: 30_000 });
+    const head = block.closest('thead');
+    expect(head).not.toBeNull();
+    // The sheet has issued revision 2; the live copy is not it.
+    expect(head!.querySelector('[data-not-issued]')?.textContent).toMatch(/^Not issued — draft.*The calculation of record is revision 2/);
+    expect(screen.getByRole('complementary', { name: 'Notes' }).closest('.no-print')).not.toBeNull();
+    const margins = document.querySelector('style[data-print-margins]')?.textContent ?? '';
+    expect(margins).toContain('@top-center { content: "Not issued — draft"');
+    expect(margins).toMatch(/@bottom-left \{ content: "GBL-001 · live sheet, not issued · printed \d{4}-\d\d-\d\d \d\d:\d\d"/);
+  }, 60_000);
+
   it('gives a checker the live sheet read-only: no controls, results follow remote edits', async () => {
     serve('checker');
     renderApp(`/sheets/${lug.id}`);

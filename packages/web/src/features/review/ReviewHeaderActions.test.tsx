@@ -106,9 +106,11 @@ describe('ReviewHeaderActions', () => {
     expect(await screen.findByText('Revision 2 is in preparation; revision 1 is issued.')).toBeTruthy();
     expect(screen.getByText('Use the factored sling load.')).toBeTruthy();
     expect(screen.getByText('1 open note')).toBeTruthy();
+    // No workflow action; printing the draft is open to anyone who reads the sheet.
     const buttons = screen.queryAllByRole('button').map((b) => b.textContent);
-    expect(buttons).toEqual([]);
+    expect(buttons).toEqual(['Print draft…']);
     expect(screen.getByRole('link', { name: 'Revisions' }).getAttribute('href')).toBe(`/sheets/${SHEET_ID}/revisions`);
+    expect(screen.getByRole('link', { name: 'Issued revision 1' }).getAttribute('href')).toBe(`/sheets/${SHEET_ID}/revisions/1`);
   });
 
   it('lets an owner hand the check to another member, never the preparer', async () => {
