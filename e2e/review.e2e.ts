@@ -183,8 +183,8 @@ describe('check and approval', () => {
 
     // The first revision is still there, read-only, with the note it was checked with.
     await engineer.goto(`${baseUrl()}/sheets/${sheetId}/revisions/1`);
-    await expect.poll(() => engineer.getByRole('note').innerText()).toContain('Read-only: revision 1');
-    const notes = engineer.getByRole('complementary', { name: 'Notes made on revision 1' });
+    await expect.poll(() => engineer.getByRole('note', { name: 'Issue' }).innerText()).toMatch(/^Revision 1, issued .*; superseded on .* by revision 2/);
+    const notes = engineer.getByRole('region', { name: 'Notes on cell 4, S' });
     await expect.poll(() => notes.innerText()).toContain('Lever arm: the drawing gives 50 mm');
     expect(await engineer.locator('[data-cell-id="q2"]').innerText()).toContain('50 mm');
     await screenshot(engineer, 'review-past-revision');

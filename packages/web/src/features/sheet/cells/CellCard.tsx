@@ -156,7 +156,7 @@ export const CellCard = memo(function CellCard(props: CellCardProps) {
           ) : null}
         </header>
 
-        <div className={view?.Figure ? 'grid gap-x-5 gap-y-3 @min-[62rem]:grid-cols-[minmax(0,1fr)_minmax(0,26rem)] print:grid-cols-[minmax(0,1fr)_minmax(0,24rem)]' : ''}>
+        <div className={view?.Figure ? 'cell-layout grid gap-x-5 gap-y-3 @min-[62rem]:grid-cols-[minmax(0,1fr)_minmax(0,26rem)] print:grid-cols-[minmax(0,1fr)_minmax(0,24rem)]' : ''}>
           <div className="cell-inputs @container min-w-0 space-y-1.5">
             {view ? (
               <view.Inputs cell={cell} cellName={cellName} result={result} errorField={errorField} errorId={errorId} />

@@ -1,18 +1,39 @@
 /**
- * Records on an equation laid out for paper (`.equation-paper`, `.equation-print`) how large its type may be for its
- * widest unbreakable piece to fit the column: `--eq-fit` = font size / width of that piece, a
- * ratio that does not depend on the column's width, so styles/print.css can size the type as
- * `--eq-fit × 100cqi` on any page width. KaTeX breaks a line only between top-level pieces (after
- * a relation or an operator); an aligned block is one piece.
+ * Steps wider than this many rem at their full size are too wide for the narrow column beside a
+ * figure on paper (about 25rem of an A4 or Letter page, less a third for smaller type): the cell
+ * is then printed with its figure under its equations (`data-wide` in styles/print.css).
  */
-export function fitEquation(element: HTMLElement): void {
-  let widest = 0;
-  for (const piece of element.querySelectorAll('.katex-html > .katex-base')) widest = Math.max(widest, piece.getBoundingClientRect().width);
-  const fontSize = Number.parseFloat(getComputedStyle(element).fontSize);
-  if (widest > 0 && fontSize > 0) element.style.setProperty('--eq-fit', (fontSize / widest).toFixed(6));
+const WIDE_STEP_REM = 36;
+
+/**
+ * Records on each step of an equation laid out for paper (`.equation-step`, see PaperEquation) how
+ * large its type may be for its widest unbreakable piece to fit its column: `--eq-fit` = font size
+ * / width of that piece. The ratio does not depend on the column's width, so styles/print.css can
+ * size the type as `--eq-fit × 100cqi` on screen and on any paper width. KaTeX breaks a line only
+ * between top-level pieces (after a relation or an operator), so only the widest piece matters.
+ * An equation with a step wider than `WIDE_STEP_REM` at full size is marked `data-wide`. `root`
+ * is an equation or holds some.
+ */
+export function fitEquationSteps(root: ParentNode): void {
+  const rootPx = Number.parseFloat(getComputedStyle(document.documentElement).fontSize) || 16;
+  const equations = [...root.querySelectorAll<HTMLElement>('.equation-paper')];
+  if (root instanceof HTMLElement && root.matches('.equation-paper')) equations.push(root);
+  for (const equation of equations) {
+    let wide = false;
+    for (const step of equation.querySelectorAll<HTMLElement>('.equation-step')) {
+      let widest = 0;
+      for (const piece of step.querySelectorAll('.katex-html > .katex-base')) widest = Math.max(widest, piece.getBoundingClientRect().width);
+      const fontPx = Number.parseFloat(getComputedStyle(step).fontSize);
+      const fullPx = Number.parseFloat(getComputedStyle(step.parentElement ?? step).fontSize);
+      if (!(widest > 0 && fontPx > 0)) continue;
+      step.style.setProperty('--eq-fit', (fontPx / widest).toFixed(6));
+      if ((widest * fullPx) / fontPx / rootPx > WIDE_STEP_REM) wide = true;
+    }
+    equation.toggleAttribute('data-wide', wide);
+  }
 }
 
-/** While measuring, the paper layout of the editor's equations (hidden on screen) is laid out. */
+/** While measuring, the paper layouts of the editor's equations (hidden on screen) are laid out. */
 const MEASURING = 'sheaf-measuring-equations';
 
 /**
@@ -23,7 +44,7 @@ export function fitEquationsForPrint(root: ParentNode = document): void {
   const html = document.documentElement;
   html.classList.add(MEASURING);
   try {
-    root.querySelectorAll<HTMLElement>('.equation-paper, .equation-print').forEach(fitEquation);
+    fitEquationSteps(root);
   } finally {
     html.classList.remove(MEASURING);
   }
