@@ -31,12 +31,12 @@ describe('RevisionPage', () => {
   it('renders the revision as the issued calculation: title block, cells as the sheet draws them, checks, materials, notes', async () => {
     serve(issuedRevision());
     renderApp(`/sheets/${SHEET.id}/revisions/1`);
-    const article = await screen.findByRole('article', { name: 'Revision 1 as issued' }, { timeout: 5000 });
+    const article = await screen.findByRole('article', { name: 'Revision 1 as issued' }, { timeout: 30_000 });
 
     // Title block: what, which revision, who signed, repeated on every printed page.
     const block = screen.getByRole('region', { name: 'Title block' });
     expect(block.closest('thead')).not.toBeNull();
-    await waitFor(() => expect(block.textContent).toContain('Hoist Works'));
+    await waitFor(() => expect(block.textContent).toContain('Hoist Works'), { timeout: 30_000 });
     expect(block.textContent).toContain('GBL-001');
     expect(block.textContent).toMatch(/Prepared\s*Bruno Keel\s*2025-03-12/);
     expect(block.textContent).toMatch(/Checked\s*Alice Marsh\s*2025-03-14/);
@@ -85,32 +85,32 @@ describe('RevisionPage', () => {
 
     // The materials as frozen, and the notes of the check with how they were resolved.
     expect(screen.getByRole('region', { name: 'Materials used' }).textContent).toContain('Plate S355, our stock');
-    const notes = await screen.findByRole('region', { name: 'Notes on cell 5, MAT' });
+    const notes = await screen.findByRole('region', { name: 'Notes on cell 5, MAT' }, { timeout: 30_000 });
     expect(notes.textContent).toContain('Yield strength of the stock plate: attach the certificate.');
     expect(notes.textContent).toContain('Certificate 4471 filed with the job.');
     expect(notes.textContent).toMatch(/Resolved by Alice Marsh/);
-  });
+  }, 60_000);
 
   it('says loudly when the issued results cannot be reproduced, and shows the issued numbers', async () => {
     const revision = issuedRevision();
     const de = revision.results.cells.DE!;
     serve({ ...revision, results: { cells: { ...revision.results.cells, DE: { ...de, values: { ...de.values, factor: 9.99 } } } } });
     renderApp(`/sheets/${SHEET.id}/revisions/1`);
-    const alert = await screen.findByRole('alert', {}, { timeout: 5000 });
+    const alert = await screen.findByRole('alert', {}, { timeout: 30_000 });
     expect(alert.textContent).toContain('Do not use this page as the issued calculation');
     expect(within(alert).getAllByRole('row').map((row) => row.textContent)).toEqual(['cellvalue (SI)issuednow', expect.stringMatching(/^DEfactor9\.994\.67/)]);
     expect(cell('c1').querySelector('[data-value="factor"] [data-number]')?.textContent).toBe('9.99');
-  });
+  }, 60_000);
 
   it('marks a superseded revision and the override of open notes', async () => {
     serve(issuedRevision({ status: 'superseded', supersededAt: '2025-04-02T11:00:00.000Z', overrideReason: 'Certificate on its way; values conservative.', openNotesAtApproval: 1 }));
     renderApp(`/sheets/${SHEET.id}/revisions/1`);
-    const issue = await screen.findByRole('note', { name: 'Issue' }, { timeout: 5000 });
+    const issue = await screen.findByRole('note', { name: 'Issue' }, { timeout: 30_000 });
     expect(issue.textContent).toMatch(/superseded on 2025-04-02 \d\d:\d\d by revision 2/);
     expect(screen.getByRole('region', { name: 'Title block' }).textContent).toContain('Superseded');
     expect(screen.getByText(/Approved with 1 note still open/).textContent).toContain('Certificate on its way; values conservative.');
     const margins = document.querySelector('style[data-print-margins]')?.textContent ?? '';
     expect(margins).toContain('@top-center');
     expect(margins).toContain('counter(page)');
-  });
+  }, 60_000);
 });
