@@ -41,7 +41,7 @@ export function PaperEquation({ rows, label, fitNow }: { rows: readonly Equation
             <div className="text-right">
               <TexView latex={`\\displaystyle ${row.lhs}`} />
             </div>
-            <div className="@container min-w-0">
+            <div className="@container min-w-0 space-y-1">
               {row.steps.map((step, at) => (
                 <div key={at}>
                   <TexView latex={`\\displaystyle = \\nobreak ${step}`} className="equation-step" />

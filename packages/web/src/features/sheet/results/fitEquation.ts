@@ -1,9 +1,10 @@
 /**
- * Steps wider than this many rem at their full size are too wide for the narrow column beside a
- * figure on paper (about 25rem of an A4 or Letter page, less a third for smaller type): the cell
- * is then printed with its figure under its equations (`data-wide` in styles/print.css).
+ * Steps wider than this many rem at their full size are too wide for the column beside a figure
+ * on paper (about 21rem of an A4 or Letter page; a step up to a third wider is set in smaller
+ * type): the cell is then printed with its figure under its equations (`data-wide` in
+ * styles/print.css), where the column is twice as wide.
  */
-const WIDE_STEP_REM = 36;
+const WIDE_STEP_REM = 28;
 
 /**
  * Records on each step of an equation laid out for paper (`.equation-step`, see PaperEquation) how
